@@ -1,0 +1,2 @@
+export * from './quadrature';
+export * from './minimize';
