@@ -1,0 +1,82 @@
+import { createBrowserRouter, type RouteObject, type ShouldRevalidateFunction } from 'react-router';
+import { queryClient, setSessionLostHandler } from '@client/lib/query-client';
+import { requireAdmin, requireMe } from '@client/features/session/lib/require-session';
+import { SignInPage, signInLoader } from '@client/features/session/routes/sign-in-page';
+import { signInPath } from '@client/features/session/lib/return-to';
+import { AppLayout } from './layout';
+import { RouteError } from './route-error';
+import { NotFoundPage } from './not-found';
+import { HydrateFallback } from './hydrate-fallback';
+
+/**
+ * Filters and sorting live in the search string; changing them must not
+ * re-run the session loaders (they would only read the cache, but each run
+ * makes the navigation asynchronous and a typed filter would lag).
+ */
+const skipSearchOnlyChanges: ShouldRevalidateFunction = ({ currentUrl, nextUrl, formMethod, defaultShouldRevalidate }) =>
+  !formMethod && currentUrl.pathname === nextUrl.pathname ? false : defaultShouldRevalidate;
+
+export const routes: RouteObject[] = [
+  {
+    id: 'root',
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <HydrateFallback />,
+    children: [
+      {
+        path: '/signin',
+        loader: signInLoader,
+        Component: SignInPage,
+      },
+      {
+        id: 'signed-in',
+        loader: ({ request }) => requireMe(request),
+        shouldRevalidate: skipSearchOnlyChanges,
+        Component: AppLayout,
+        children: [
+          {
+            // Errors inside a page keep the header and navigation around them.
+            errorElement: <RouteError />,
+            children: [
+              {
+                index: true,
+                lazy: async () => ({
+                  Component: (await import('@client/features/dashboard/routes/dashboard-page')).DashboardPage,
+                }),
+              },
+              {
+                path: 'courses',
+                lazy: async () => ({
+                  Component: (await import('@client/features/courses/routes/courses-page')).CoursesPage,
+                }),
+              },
+              {
+                path: 'admin/people',
+                loader: ({ request }) => requireAdmin(request),
+                shouldRevalidate: skipSearchOnlyChanges,
+                lazy: async () => ({ Component: (await import('@client/features/admin/routes/people-page')).PeoplePage }),
+              },
+              {
+                path: 'admin/audit',
+                loader: ({ request }) => requireAdmin(request),
+                shouldRevalidate: skipSearchOnlyChanges,
+                lazy: async () => ({ Component: (await import('@client/features/admin/routes/audit-page')).AuditPage }),
+              },
+              { path: '*', Component: NotFoundPage },
+            ],
+          },
+        ],
+      },
+    ],
+  },
+];
+
+export const router = createBrowserRouter(routes);
+
+// A 401 from any query or mutation while the app is open: forget everything
+// personal and ask the person to sign in again, coming back to where they were.
+setSessionLostHandler(() => {
+  const { pathname, search } = router.state.location;
+  if (pathname === '/signin') return;
+  queryClient.clear();
+  void router.navigate(signInPath(pathname + search), { replace: true });
+});
