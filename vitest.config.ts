@@ -1,5 +1,5 @@
 import { defineConfig } from 'vitest/config';
-import { aliases } from './vite.config';
+import { aliases } from './vite.config.ts';
 
 // Two projects: "unit" needs nothing but Node; "integration" (and the browser
 // journeys under tests/e2e) share one private MariaDB started by the global setup.

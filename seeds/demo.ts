@@ -1,0 +1,45 @@
+/**
+ * The demo scenario, loaded by `npm start` into an empty database. Tests never
+ * depend on it. Later features add their part of the scenario here.
+ */
+import type { Knex } from 'knex';
+import { demoOtherStaff, demoRoleAccounts, demoStudents, type DemoPerson } from './demo-people';
+
+export async function seedDemo(knex: Knex, issuer: string): Promise<void> {
+  await knex.transaction(async (trx) => {
+    const ids = new Map<string, number>();
+    for (const p of [...demoRoleAccounts, ...demoOtherStaff, ...demoStudents]) {
+      const [id] = await trx('users').insert({
+        oidc_issuer: issuer,
+        oidc_subject: p.login,
+        email: p.email,
+        display_name: `${p.givenName} ${p.familyName}`,
+      });
+      ids.set(p.login, id);
+    }
+    const id = (login: string) => ids.get(login)!;
+    await trx('user_site_roles').insert({ user_id: id('admin'), role: 'admin' });
+
+    const [termId] = await trx('terms').insert({ name: 'Autumn 2026', starts_on: '2026-09-14', ends_on: '2026-12-18' });
+    const [physChem] = await trx('courses').insert({ term_id: termId, code: 'CHEM 2140', title: 'Computational Quantum Chemistry Laboratory' });
+    const [moTheory] = await trx('courses').insert({ term_id: termId, code: 'CHEM 3310', title: 'Molecular Orbital Theory Laboratory' });
+
+    await trx('course_staff').insert([
+      { course_id: physChem, user_id: id('lecturer'), role: 'lecturer' },
+      { course_id: physChem, user_id: id('assistant'), role: 'assistant' },
+      { course_id: physChem, user_id: id('a.boateng'), role: 'assistant' },
+      { course_id: moTheory, user_id: id('h.solvang'), role: 'lecturer' },
+      { course_id: moTheory, user_id: id('lecturer'), role: 'lecturer' },
+      { course_id: moTheory, user_id: id('l.ferrante'), role: 'assistant' },
+    ]);
+
+    const enrol = (courseId: number, p: DemoPerson) => ({ course_id: courseId, user_id: id(p.login), student_number: p.login === 'student' ? '2400001' : p.login.slice(1), status: 'active' });
+    const rows = [enrol(physChem, demoRoleAccounts[3])];
+    demoStudents.slice(0, 40).forEach((p) => rows.push(enrol(physChem, p)));
+    demoStudents.slice(40).forEach((p) => rows.push(enrol(moTheory, p)));
+    rows.push(enrol(moTheory, demoRoleAccounts[3]));
+    await trx('enrolments').insert(rows);
+
+    await trx('audit_log').insert({ actor_id: null, action: 'demo.seeded', entity_type: 'site', entity_id: null, after_json: JSON.stringify({ people: ids.size }) });
+  });
+}

@@ -1,0 +1,4 @@
+export * from './errors';
+export * from './session';
+export * from './admin';
+export * from './courses';
