@@ -9,25 +9,16 @@
  *  5. the app, at the printed address.
  */
 import path from 'node:path';
-import { existsSync, statSync, readdirSync } from 'node:fs';
 import { readEnv, buildConfig } from '../server/src/platform/config';
 import { createDb, migrateLatest } from '../server/src/platform/db';
 import { createLogger } from '../server/src/platform/logging';
 import { discoverOidc } from '../server/src/platform/auth/discovery';
-import { createApp, clientDist } from '../server/src/app';
+import { createApp } from '../server/src/app';
 import { startPrivateMariadb, stopStrayMariadb } from './lib/mariadb';
 import { loadDevSecrets } from './lib/dev-secrets';
+import { ensureClientBuilt } from './lib/client-build';
 
 const dev = process.argv.includes('--dev');
-
-function newestMtime(dir: string): number {
-  let newest = 0;
-  for (const entry of readdirSync(dir, { withFileTypes: true })) {
-    const p = path.join(dir, entry.name);
-    newest = Math.max(newest, entry.isDirectory() ? newestMtime(p) : statSync(p).mtimeMs);
-  }
-  return newest;
-}
 
 async function main() {
   const env = readEnv();
@@ -102,15 +93,7 @@ async function main() {
     }
 
     // 5. client
-    if (!dev) {
-      const built = path.join(clientDist, 'index.html');
-      const clientSrc = path.resolve('client');
-      if (!existsSync(built) || newestMtime(clientSrc) > statSync(built).mtimeMs) {
-        console.log('[client] building the client (vite build)…');
-        const { build } = await import('vite');
-        await build({ configFile: path.resolve('vite.config.ts'), logLevel: 'warn' });
-      }
-    }
+    if (!dev) await ensureClientBuilt();
 
     const config = buildConfig({
       ...env,

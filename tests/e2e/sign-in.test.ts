@@ -1,0 +1,70 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { startAppContext, type AppContext } from '../support/app-context';
+import { launchBrowser } from '../support/browser';
+import { ensureClientBuilt } from '../../scripts/lib/client-build';
+
+let ctx: AppContext;
+let browser: Browser;
+
+beforeAll(async () => {
+  await ensureClientBuilt(() => {});
+  ctx = await startAppContext({ client: 'static' });
+  const k = ctx.db.knex;
+  const [lec] = await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: 'lec1', email: 'lec1@test.example', display_name: 'Lena Lecturer' });
+  const [stu] = await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: 'stu1', email: 'stu1@test.example', display_name: 'Stella Student' });
+  const [term] = await k('terms').insert({ name: 'Spring 2027', starts_on: '2027-01-11', ends_on: '2027-05-07' });
+  const [course] = await k('courses').insert({ term_id: term, code: 'TST 410', title: 'Bonding in practice' });
+  await k('course_staff').insert({ course_id: course, user_id: lec, role: 'lecturer' });
+  await k('enrolments').insert({ course_id: course, user_id: stu, student_number: '1000001' });
+  browser = await launchBrowser();
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await ctx?.close();
+});
+
+async function signInAs(login: string) {
+  const page = await browser.newPage();
+  await page.goto(`${ctx.baseUrl}/courses`);
+  // not signed in: the app sends us to its sign-in screen
+  await page.waitForURL(/\/signin/);
+  await page.getByRole('button', { name: /Sign in with your university account/ }).or(page.getByRole('link', { name: /Sign in with your university account/ })).click();
+  // the identity provider's page
+  await page.waitForURL(new RegExp(`^${ctx.issuer}/interaction/`));
+  await page.getByLabel('University login').fill(login);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await page.waitForURL(`${ctx.baseUrl}/courses`);
+  return page;
+}
+
+describe('signing in with a browser', () => {
+  it('a lecturer signs in and sees their dashboard and courses, without admin navigation', async () => {
+    const page = await signInAs('lec1');
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await expect.poll(() => nav.getByRole('link', { name: 'Courses' }).count()).toBe(1);
+    expect(await nav.getByRole('link', { name: 'People' }).count()).toBe(0);
+    await expect.poll(() => page.getByText('TST 410').count()).toBeGreaterThan(0);
+    await nav.getByRole('link', { name: 'Dashboard' }).click();
+    await page.waitForURL(`${ctx.baseUrl}/`);
+    await expect.poll(() => page.getByText('Lena Lecturer').count()).toBeGreaterThan(0);
+    await page.close();
+  });
+
+  it('a student sees no staff navigation', async () => {
+    const page = await signInAs('stu1');
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await expect.poll(() => nav.getByRole('link', { name: 'Dashboard' }).count()).toBe(1);
+    expect(await nav.getByRole('link', { name: 'People' }).count()).toBe(0);
+    expect(await nav.getByRole('link', { name: 'Audit log' }).count()).toBe(0);
+    await page.close();
+  });
+
+  it('unknown client routes show the not-found page', async () => {
+    const page = await signInAs('lec1');
+    await page.goto(`${ctx.baseUrl}/no/such/page`);
+    await expect.poll(() => page.getByRole('heading', { name: 'Page not found' }).count()).toBe(1);
+    await page.close();
+  });
+});
