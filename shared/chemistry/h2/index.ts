@@ -1,0 +1,14 @@
+export { h2Methods, h2States } from './types';
+export type { H2Method, H2State, H2Geometry, H2Energy } from './types';
+export { twoElectronIntegrals } from './two-electron-integrals';
+export type { H2TwoElectronIntegrals } from './two-electron-integrals';
+export { h2Energy } from './h2-energy';
+export type { H2EnergyInput } from './h2-energy';
+export { h2OptimizedZeta } from './h2-optimized-zeta';
+export type { H2OptimizedZetaInput, H2OptimizedZeta } from './h2-optimized-zeta';
+export { h2Curve } from './h2-curve';
+export type { H2CurveInput, H2CurvePoint } from './h2-curve';
+export { h2DissociationLimit } from './h2-dissociation-limit';
+export type { H2DissociationLimitInput, H2DissociationLimit } from './h2-dissociation-limit';
+export { h2Equilibrium } from './h2-equilibrium';
+export type { H2EquilibriumInput, H2Equilibrium } from './h2-equilibrium';
