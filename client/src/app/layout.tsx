@@ -96,7 +96,7 @@ function SideNavigation() {
               end={item.end}
               data-testid={`nav-${item.label.toLowerCase().replace(/\s+/g, '-')}`}
               className={({ isActive }) =>
-                'block rounded-[3px] border-l-[3px] px-3 py-1.5 no-underline transition-colors ' +
+                'block rounded-[3px] border-b-2 px-3 py-1.5 no-underline transition-colors lg:border-b-0 lg:border-l-[3px] ' +
                 (isActive
                   ? 'border-reference bg-wash font-semibold text-ink'
                   : 'border-transparent text-ink hover:bg-wash')

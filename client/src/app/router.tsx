@@ -3,6 +3,8 @@ import { queryClient, setSessionLostHandler } from '@client/lib/query-client';
 import { requireAdmin, requireMe } from '@client/features/session/lib/require-session';
 import { SignInPage, signInLoader } from '@client/features/session/routes/sign-in-page';
 import { signInPath } from '@client/features/session/lib/return-to';
+import { meQueryOptions } from '@client/features/session/api/get-me';
+import { isApiError } from '@client/lib/api';
 import { AppLayout } from './layout';
 import { RouteError } from './route-error';
 import { NotFoundPage } from './not-found';
@@ -72,11 +74,24 @@ export const routes: RouteObject[] = [
 
 export const router = createBrowserRouter(routes);
 
-// A 401 from any query or mutation while the app is open: forget everything
-// personal and ask the person to sign in again, coming back to where they were.
-setSessionLostHandler(() => {
-  const { pathname, search } = router.state.location;
-  if (pathname === '/signin') return;
-  queryClient.clear();
-  void router.navigate(signInPath(pathname + search), { replace: true });
+// A 401 from any query or mutation while the app is open. Ask /me whether the
+// session really has ended (so that one odd 401 cannot bounce the person
+// between /signin and the page forever); if it has, forget everything
+// personal and go to sign-in, coming back here afterwards.
+let checkingSession = false;
+setSessionLostHandler(async () => {
+  if (checkingSession || router.state.location.pathname === '/signin') return;
+  checkingSession = true;
+  try {
+    await queryClient.fetchQuery({ ...meQueryOptions(), staleTime: 0 });
+    // Still signed in: the page shows the failed request as an error.
+  } catch (error) {
+    if (isApiError(error) && error.status === 401) {
+      const { pathname, search } = router.state.location;
+      queryClient.clear();
+      await router.navigate(signInPath(pathname + search), { replace: true });
+    }
+  } finally {
+    checkingSession = false;
+  }
 });

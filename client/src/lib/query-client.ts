@@ -6,8 +6,8 @@ import { ApiError } from './api-error';
  * is using the app. The router registers the real handler (a navigation to
  * /signin?returnTo=...); until then nothing happens.
  */
-let onSessionLost: () => void = () => {};
-export function setSessionLostHandler(handler: () => void): void {
+let onSessionLost: () => void | Promise<void> = () => {};
+export function setSessionLostHandler(handler: () => void | Promise<void>): void {
   onSessionLost = handler;
 }
 
@@ -23,7 +23,7 @@ function handleQueryError(error: unknown, query: Query<unknown, unknown, unknown
   // The route loaders decide what a first, data-less 401 means (e.g. /me on a cold start).
   const meta = query.meta as QueryMeta | undefined;
   if (meta?.quietUnauthenticated && query.state.data === undefined) return;
-  onSessionLost();
+  void onSessionLost();
 }
 
 export function createQueryClient(): QueryClient {
@@ -31,7 +31,7 @@ export function createQueryClient(): QueryClient {
     queryCache: new QueryCache({ onError: handleQueryError }),
     mutationCache: new MutationCache({
       onError: (error) => {
-        if (isUnauthenticated(error)) onSessionLost();
+        if (isUnauthenticated(error)) void onSessionLost();
       },
     }),
     defaultOptions: {

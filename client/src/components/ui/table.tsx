@@ -26,11 +26,18 @@ export function Table({
   );
 }
 
-export function Th({ className = '', ...rest }: ThHTMLAttributes<HTMLTableCellElement>) {
+export function Th({
+  className = '',
+  flush = false,
+  ...rest
+}: ThHTMLAttributes<HTMLTableCellElement> & {
+  /** No padding: the cell holds a full-size control (e.g. a sort button) that brings its own. */
+  flush?: boolean;
+}) {
   return (
     <th
       scope="col"
-      className={`sticky top-0 border-b border-rule-strong bg-wash px-3 py-2 align-bottom text-[0.8rem] font-semibold tracking-[0.02em] whitespace-nowrap text-graphite ${className}`}
+      className={`sticky top-0 border-b border-rule-strong bg-wash align-bottom text-[0.8rem] font-semibold tracking-[0.02em] whitespace-nowrap text-graphite ${flush ? '' : 'px-3 py-2'} ${className}`}
       {...rest}
     />
   );

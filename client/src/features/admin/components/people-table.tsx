@@ -150,12 +150,12 @@ export function PeopleTable({
                 <Th
                   key={header.id}
                   aria-sort={direction === 'asc' ? 'ascending' : direction === 'desc' ? 'descending' : 'none'}
-                  className="p-0"
+                  flush
                 >
                   <button
                     type="button"
                     onClick={header.column.getToggleSortingHandler()}
-                    className="flex w-full items-center gap-1.5 px-3 py-2 text-left font-semibold hover:text-ink"
+                    className="flex w-full items-center gap-1.5 px-3 py-2 text-left font-semibold hover:bg-rule/40 hover:text-ink"
                     data-testid={`sort-${header.column.id}`}
                   >
                     {flexRender(header.column.columnDef.header, header.getContext())}
