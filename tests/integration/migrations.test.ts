@@ -17,7 +17,7 @@ describe('migrations', () => {
     db = await createTestDatabase({ migrate: false });
     const [, up] = await db.knex.migrate.latest(migrationConfig);
     expect(up.length).toBeGreaterThanOrEqual(4);
-    expect(await tables()).toEqual(expect.arrayContaining(['audit_log', 'course_staff', 'courses', 'enrolments', 'sessions', 'terms', 'user_site_roles', 'users']));
+    expect(await tables()).toEqual(expect.arrayContaining(['audit_log', 'course_staff', 'courses', 'enrolments', 'sessions', 'terms', 'user_site_roles', 'users', 'sections', 'exercises', 'exercise_revisions', 'variants', 'reports', 'marks', 'adjustments', 'jobs', 'stored_files', 'similarity_flags']));
     await db.knex.migrate.rollback(migrationConfig, true);
     expect(await tables()).toEqual([]);
     const [, again] = await db.knex.migrate.latest(migrationConfig);
