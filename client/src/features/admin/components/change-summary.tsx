@@ -7,7 +7,8 @@ function Line({ line }: { line: ChangeLine }) {
   if (line.kind === 'added') {
     return (
       <li>
-        <span className="text-bonding" aria-label="added">+ </span>
+        <span className="text-bonding" aria-hidden="true">+ </span>
+        <span className="sr-only">added </span>
         {key}
         <span className="text-bonding">{line.after}</span>
       </li>
@@ -16,7 +17,8 @@ function Line({ line }: { line: ChangeLine }) {
   if (line.kind === 'removed') {
     return (
       <li>
-        <span className="text-antibonding" aria-label="removed">− </span>
+        <span className="text-antibonding" aria-hidden="true">− </span>
+        <span className="sr-only">removed </span>
         {key}
         <del className="text-antibonding">{line.before}</del>
       </li>
@@ -26,8 +28,10 @@ function Line({ line }: { line: ChangeLine }) {
     <li>
       <span className="text-graphite" aria-hidden="true">~ </span>
       {key}
+      <span className="sr-only">changed from </span>
       <del className="text-antibonding no-underline">{line.before}</del>
-      <span className="text-graphite"> → </span>
+      <span className="text-graphite" aria-hidden="true"> → </span>
+      <span className="sr-only"> to </span>
       <ins className="text-bonding no-underline">{line.after}</ins>
     </li>
   );
@@ -43,7 +47,7 @@ export function ChangeSummary({ before, after }: { before: unknown; after: unkno
   const hidden = lines.length - shown.length;
   return (
     <div className="text-[0.8rem] leading-5">
-      <ul className="num break-all" data-testid="change-lines">
+      <ul className="num [overflow-wrap:anywhere]" data-testid="change-lines">
         {shown.map((line) => (
           <Line key={`${line.kind}:${line.key}`} line={line} />
         ))}

@@ -19,7 +19,7 @@ function AuditRow({ entry }: { entry: AuditEntry }) {
           <Num>#{entry.id}</Num>
         </div>
       </Td>
-      <Td className="whitespace-nowrap">
+      <Td className="min-w-[7rem]">
         {entry.actorName ?? <span className="text-graphite">{entry.actorId === null ? 'System' : `Account ${entry.actorId}`}</span>}
       </Td>
       <Td className="whitespace-nowrap">
@@ -29,7 +29,7 @@ function AuditRow({ entry }: { entry: AuditEntry }) {
         {entry.entityType}
         {entry.entityId !== null ? <Num className="text-graphite"> {entry.entityId}</Num> : null}
       </Td>
-      <Td className="min-w-[18rem]">
+      <Td className="min-w-[15rem]">
         <ChangeSummary before={entry.before} after={entry.after} />
       </Td>
     </tr>
