@@ -123,6 +123,7 @@ describe('parseTermSymbol', () => {
     '3Σg-',
     '³Σg⁻',
     '^3\\Sigma_g^-',
+    '^3\\\\Sigma_g^-', // doubled backslash, as it appears when escaped once too often
     '^{3}\\Sigma_{g}^{-}',
     '$^3\\Sigma^-_g$',
     '^3\\mathrm{\\Sigma}_g^-',
