@@ -40,7 +40,8 @@ export function generalizedEigenTwoByTwo(
   const hgu = (haa - hbb) / (2 * Math.sqrt(1 - s * s));
 
   // Jacobi rotation: [cos θ, sin θ] and [−sin θ, cos θ] diagonalize [[hgg, hgu], [hgu, huu]].
-  const theta = 0.5 * Math.atan2(2 * hgu, hgg - huu);
+  // (hgu = 0 exactly for Za = Zb: no rotation, so g and u stay exact)
+  const theta = hgu === 0 ? 0 : 0.5 * Math.atan2(2 * hgu, hgg - huu);
   const cos = Math.cos(theta);
   const sin = Math.sin(theta);
   const first = cos * cos * hgg + 2 * sin * cos * hgu + sin * sin * huu;
