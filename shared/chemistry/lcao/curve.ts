@@ -35,13 +35,23 @@ export function lcaoCurve({ za, zb, zeta, state, distancesBohr }: LcaoCurveInput
   const electronicHartree: number[] = new Array(distanceBohr.length);
   if (zeta === 'opt') {
     const zetas: number[] = new Array(distanceBohr.length);
-    let guess: number | undefined;
+    let lastMiss = Number.NaN; // |optimal − predicted ζ| at the previous point
     for (let i = 0; i < distanceBohr.length; i++) {
-      const point = lcaoOptimizedZeta({ za, zb, distanceBohr: distanceBohr[i], state, zetaGuess: guess });
+      let zetaGuess: number | undefined;
+      let zetaWindow: number | undefined;
+      if (i >= 1) {
+        zetaGuess = zetas[i - 1];
+        const dr = distanceBohr[i] - distanceBohr[i - 1];
+        const drPrev = i >= 2 ? distanceBohr[i - 1] - distanceBohr[i - 2] : 0;
+        if (drPrev !== 0) zetaGuess += ((zetas[i - 1] - zetas[i - 2]) / drPrev) * dr; // linear extrapolation
+        // the next miss is about as large as the last one when the step is alike
+        if (Number.isFinite(lastMiss) && drPrev !== 0 && Math.abs(dr) <= 2 * Math.abs(drPrev)) zetaWindow = 4 * lastMiss + 1e-6;
+      }
+      const point = lcaoOptimizedZeta({ za, zb, distanceBohr: distanceBohr[i], state, zetaGuess, zetaWindow });
       energyHartree[i] = point.energyHartree;
       electronicHartree[i] = point.electronicHartree;
       zetas[i] = point.zeta;
-      guess = point.zeta;
+      lastMiss = zetaGuess === undefined || i < 2 ? Number.NaN : Math.abs(point.zeta - zetaGuess);
     }
     return { distanceBohr, energyHartree, electronicHartree, zeta: zetas };
   }

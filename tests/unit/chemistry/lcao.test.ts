@@ -217,11 +217,11 @@ describe('minima of the minimal-LCAO H2+ curves', () => {
   });
 
   it('the optimized exponent is a true minimum and never above the ζ = 1 energy (variational)', () => {
-    for (const r of grid(0.2, 15, 40)) {
+    for (const [za, zb] of [[1, 1], [2, 1]]) for (const r of grid(0.2, 15, 40)) {
       for (const state of ['bonding', 'antibonding'] as const) {
-        const opt = lcaoOptimizedZeta({ za: 1, zb: 1, distanceBohr: r, state });
+        const opt = lcaoOptimizedZeta({ za, zb, distanceBohr: r, state });
         const energyAt = (zeta: number) => {
-          const e = lcaoEnergies({ za: 1, zb: 1, zeta, distanceBohr: r });
+          const e = lcaoEnergies({ za, zb, zeta, distanceBohr: r });
           return state === 'bonding' ? e.bondingHartree : e.antibondingHartree;
         };
         expect(opt.energyHartree).toBeCloseTo(energyAt(opt.zeta), 14);
