@@ -17,8 +17,10 @@ import { apiNotFound, errorHandler, unauthenticated } from './platform/errors';
 import { requestLogger } from './platform/logging';
 import { sessionRoutes } from './modules/session/routes';
 import { adminRoutes } from './modules/admin/routes';
-import { courseRoutes } from './modules/courses/routes';
+import { courseRoutes, termRoutes } from './modules/courses/routes';
 import { healthRoutes } from './modules/health/routes';
+import { templateRoutes } from './modules/templates/routes';
+import { courseExerciseRoutes, exerciseRoutes } from './modules/exercises/routes';
 
 export const clientDist = fileURLToPath(new URL('../../dist/client', import.meta.url));
 
@@ -75,6 +77,10 @@ export async function createApp(deps: AppDeps): Promise<BuiltApp> {
   api.use('/', sessionRoutes(deps.db, auth.generateCsrfToken));
   api.use('/admin', adminRoutes(deps.db));
   api.use('/courses', courseRoutes(deps.db));
+  api.use('/', templateRoutes(deps.db));
+  api.use('/terms', termRoutes(deps.db));
+  api.use('/courses', courseExerciseRoutes(deps.db));
+  api.use('/exercises', exerciseRoutes(deps.db));
   api.use(apiNotFound);
   app.use('/api/v1', api);
   app.use('/api', apiNotFound);
