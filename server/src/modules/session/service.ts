@@ -21,7 +21,17 @@ export async function recordSignIn(db: Knex, claims: SignInClaims, adminEmails: 
   return db.transaction(async (trx) => {
     let user = await findUserBySubject(trx, claims.issuer, claims.subject);
     const now = new Date();
-    if (!user) {
+    // A person known from a course roster who signs in for the first time: the roster
+    // made a users row without an identity; attach this identity to it (matched by e-mail).
+    const fromRoster = user
+      ? undefined
+      : await trx<UserRow>('users').whereNull('oidc_subject').andWhere('email', claims.email).orderBy('id').forUpdate().first();
+    if (fromRoster) {
+      if (!fromRoster.active) throw new InactiveAccountError('This account has been deactivated.');
+      await trx('users').where({ id: fromRoster.id }).update({ oidc_issuer: claims.issuer, oidc_subject: claims.subject, email: claims.email, display_name: claims.displayName, last_sign_in_at: now, updated_at: now });
+      await recordAudit(trx, { actorId: fromRoster.id, action: 'user.linked_on_first_sign_in', entityType: 'user', entityId: fromRoster.id, before: { displayName: fromRoster.display_name }, after: { displayName: claims.displayName } });
+      user = (await trx<UserRow>('users').where({ id: fromRoster.id }).first())!;
+    } else if (!user) {
       const [id] = await trx('users').insert({
         oidc_issuer: claims.issuer,
         oidc_subject: claims.subject,
