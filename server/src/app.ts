@@ -19,7 +19,6 @@ import { sessionRoutes } from './modules/session/routes';
 import { adminRoutes } from './modules/admin/routes';
 import { courseRoutes, termRoutes } from './modules/courses/routes';
 import { healthRoutes } from './modules/health/routes';
-import { courseExerciseRoutes, exerciseRoutes } from './modules/exercises/routes';
 import { templateRoutes } from './modules/templates/routes';
 import { courseExerciseRoutes, exerciseRoutes } from './modules/exercises/routes';
 
@@ -80,8 +79,6 @@ export async function createApp(deps: AppDeps): Promise<BuiltApp> {
   api.use('/courses', courseRoutes(deps.db));
   api.use('/', templateRoutes(deps.db));
   api.use('/terms', termRoutes(deps.db));
-  api.use('/courses', courseExerciseRoutes(deps.db));
-  api.use('/exercises', exerciseRoutes(deps.db));
   api.use('/courses', courseExerciseRoutes(deps.db));
   api.use('/exercises', exerciseRoutes(deps.db));
   api.use(apiNotFound);
