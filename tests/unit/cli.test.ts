@@ -60,7 +60,7 @@ beforeAll(async () => {
     for (let next = queue.shift(); next; next = queue.shift()) results[next[0]] = await cli(next[1]);
   };
   await Promise.all([worker(), worker(), worker(), worker()]);
-}, 120_000);
+}, 300_000);
 
 const json = (run: Run) => JSON.parse(run.stdout) as Record<string, unknown>;
 

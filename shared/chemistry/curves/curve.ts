@@ -1,15 +1,16 @@
 /**
  * A potential-energy curve of one model on a list of distances (in the order given).
  * Fast paths: the homonuclear fixed-ζ LCAO curve uses the closed form
- * E± = (Haa ± Hab)/(1 ± S) + Z²/R on lcaoMatrixElements (Pauling & Wilson 1935,
- * ch. XII §42 — the 2×2 problem reduces to it exactly when Za = Zb); other LCAO
+ * E± = (Haa ± Hab)/(1 ± S) + Z²/R written out for a whole grid (homonuclear-lcao-curve.ts;
+ * Pauling & Wilson 1935, ch. XII §42 — the 2×2 problem reduces to it exactly when Za = Zb); other LCAO
  * curves go through lcaoCurve, H2 curves through h2Curve (optimized ζ warm-started
  * from the previous point), exact curves through exactCurve (energy and separation
  * constant warm-started from the previous points; Bates, Ledsham & Stewart 1953).
  */
 import { exactCurve } from '@shared/chemistry/exact';
 import { h2Curve } from '@shared/chemistry/h2';
-import { lcaoCurve, lcaoMatrixElements } from '@shared/chemistry/lcao';
+import { lcaoCurve } from '@shared/chemistry/lcao';
+import { homonuclearLcaoCurve } from './homonuclear-lcao-curve';
 import { exactStateOf, h2MethodOf, h2StateOf } from './model-mapping';
 import type { CurveModelParams, CurveResult } from './types';
 import { validateCurveParams, validateDistance } from './validate-curve-params';
@@ -17,7 +18,10 @@ import { validateCurveParams, validateDistance } from './validate-curve-params';
 export function curve(p: CurveModelParams, distancesBohr: readonly number[]): CurveResult {
   validateCurveParams(p);
   if (!Array.isArray(distancesBohr)) throw new RangeError('distances must be an array of numbers (bohr).');
-  for (let i = 0; i < distancesBohr.length; i++) validateDistance(distancesBohr[i], `R[${i}]`);
+  for (let i = 0; i < distancesBohr.length; i++) {
+    const r = distancesBohr[i];
+    if (!(typeof r === 'number' && r > 0 && r < Infinity)) validateDistance(r, `R[${i}]`); // throws, naming the point
+  }
   const { model, za, zb, zeta, state } = p;
 
   if (model === 'exact') {
@@ -26,7 +30,7 @@ export function curve(p: CurveModelParams, distancesBohr: readonly number[]): Cu
   }
 
   if (model === 'lcao') {
-    if (zeta !== 'opt' && za === zb) return homonuclearFixedZetaCurve(za, zeta, state === 'bonding', distancesBohr);
+    if (zeta !== 'opt' && za === zb) return homonuclearLcaoCurve(za, zeta, state === 'bonding', distancesBohr);
     return lcaoCurve({ za, zb, zeta, state, distancesBohr });
   }
 
@@ -42,27 +46,4 @@ export function curve(p: CurveModelParams, distancesBohr: readonly number[]): Cu
   }
   if (zetas) out.zeta = zetas;
   return out;
-}
-
-/**
- * E± = (Haa ± Hab)/(1 ± S) + Z²/R for Za = Zb = Z and one fixed exponent. As in lcaoCurve,
- * 'bonding' is the lower root: normally σg, but with ζ far from Z (e.g. Z = 3, ζ = 1.2,
- * R ≳ 4 a0) the σu combination can lie lower.
- */
-function homonuclearFixedZetaCurve(z: number, zeta: number, bonding: boolean, distancesBohr: readonly number[]): CurveResult {
-  const n = distancesBohr.length;
-  const distanceBohr: number[] = new Array(n);
-  const energyHartree: number[] = new Array(n);
-  const electronicHartree: number[] = new Array(n);
-  for (let i = 0; i < n; i++) {
-    const r = distancesBohr[i];
-    const m = lcaoMatrixElements({ za: z, zb: z, zeta, distanceBohr: r });
-    const gerade = (m.haa + m.hab) / (1 + m.overlap);
-    const ungerade = (m.haa - m.hab) / (1 - m.overlap);
-    const electronic = bonding ? Math.min(gerade, ungerade) : Math.max(gerade, ungerade);
-    distanceBohr[i] = r;
-    electronicHartree[i] = electronic;
-    energyHartree[i] = electronic + (z * z) / r;
-  }
-  return { distanceBohr, energyHartree, electronicHartree };
 }

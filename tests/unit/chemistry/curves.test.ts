@@ -34,16 +34,21 @@ describe('curves: agreement with each model’s own functions', () => {
     }
   });
 
-  it('lcao, fixed ζ curve (homonuclear closed-form path) equals lcaoCurve to 1e-14 Eh', () => {
-    const rs = grid(0.3, 12, 60);
-    for (const state of ['bonding', 'antibonding'] as const) {
-      for (const z of [1, 3]) {
-        const ours = curve(params({ model: 'lcao', za: z, zb: z, zeta: 1.2, state }), rs);
-        const theirs = lcaoCurve({ za: z, zb: z, zeta: 1.2, state, distancesBohr: rs });
-        expect(ours.distanceBohr).toEqual(rs);
-        ours.energyHartree.forEach((e, i) => expect(Math.abs(e - theirs.energyHartree[i])).toBeLessThan(1e-14 * Math.max(1, Math.abs(e))));
-        ours.electronicHartree.forEach((e, i) => expect(Math.abs(e - theirs.electronicHartree[i])).toBeLessThan(1e-14 * Math.max(1, Math.abs(e))));
-        expect(ours.zeta).toBeUndefined();
+  it('lcao, fixed ζ curve (homonuclear closed-form path) equals lcaoCurve (general 2×2 path)', () => {
+    // bonding root: to rounding (1e−14 relative) from 0.05 to 135 bohr
+    const wide = Array.from({ length: 400 }, (_, k) => 0.05 * Math.pow(1.02, k));
+    // antibonding root: (Haa − Hab)/(1 − S) is 0/0 as w = ζR → 0 in both paths, so compare from w ≈ 0.3 on
+    const moderate = grid(0.3, 12, 60);
+    for (const z of [1, 3]) {
+      for (const zeta of [0.5, 1.2, 2.5]) {
+        for (const [state, rs, tolerance] of [['bonding', wide, 1e-14], ['antibonding', moderate, 1e-13]] as const) {
+          const ours = curve(params({ model: 'lcao', za: z, zb: z, zeta, state }), rs);
+          const theirs = lcaoCurve({ za: z, zb: z, zeta, state, distancesBohr: rs });
+          expect(ours.distanceBohr).toEqual(rs);
+          ours.energyHartree.forEach((e, i) => expect(Math.abs(e - theirs.energyHartree[i])).toBeLessThan(tolerance * Math.max(1, Math.abs(e))));
+          ours.electronicHartree.forEach((e, i) => expect(Math.abs(e - theirs.electronicHartree[i])).toBeLessThan(tolerance * Math.max(1, Math.abs(e))));
+          expect(ours.zeta).toBeUndefined();
+        }
       }
     }
   });
