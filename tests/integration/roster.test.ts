@@ -338,7 +338,7 @@ describe('a 60-student XLSX roster', () => {
     expect(before).toBe(0);
     expect(await count('enrolments', { course_id: ids.c3 })).toBe(60);
     const perGroup = await ctx.db.knex('enrolments as e').join('sections as s', 's.id', 'e.section_id').where('e.course_id', ids.c3).groupBy('s.name').select('s.name').count({ n: '*' }).orderBy('s.name');
-    expect(perGroup.map((g) => [g.name, Number(g.n)])).toEqual([
+    expect((perGroup as unknown as { name: string; n: number }[]).map((g) => [g.name, Number(g.n)])).toEqual([
       ['Group 1', 20],
       ['Group 2', 20],
       ['Group 3', 20],
