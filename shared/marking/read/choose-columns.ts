@@ -74,7 +74,9 @@ export function chooseColumns(
       else textCount++;
     }
     const letter = columnLetter(c);
-    const numeric = numericCount > 0 && numericCount >= textCount;
+    // a column of numbers: more numbers than words, or any numbers under a distance/energy header
+    const named = reading?.role === 'distance' || reading?.role === 'energy';
+    const numeric = numericCount > 0 && (numericCount >= textCount || named);
     const role: ColumnInfo['role'] = numeric ? 'other' : textCount > 0 ? 'text' : 'empty';
     const baseKey = (reading && reading.name) || header || letter;
     usedKeys.set(baseKey, (usedKeys.get(baseKey) ?? 0) + 1);

@@ -110,6 +110,20 @@ export function extractPoints(table: LocatedTable, plan: ColumnPlan, ctx: Extrac
     distance.push((row.cells[d] as { value: number }).value);
     energyColumns.forEach((c, k) => energies[k].push((row.cells[c] as { value: number }).value));
   }
+  if (ctx.kind === 'xlsx' && !firstProblem) {
+    const asText: string[] = [];
+    for (let i = 0; i < end; i++) {
+      for (const c of [d, ...energyColumns]) {
+        const cell = rows[i].cells[c];
+        if (cell && cell.kind === 'number' && cell.text !== undefined) asText.push(`${letter(c)}${rows[i].rowNumber}`);
+      }
+    }
+    if (asText.length > 0) {
+      warnings.push(
+        `${asText.length === 1 ? 'Cell' : `${asText.length} cells, such as`} ${asText.slice(0, 3).join(', ')}${ctx.sheet ? ` on sheet "${ctx.sheet}"` : ''}, ${asText.length === 1 ? 'holds a number' : 'hold numbers'} stored as text; ${asText.length === 1 ? 'it was' : 'they were'} read as ${asText.length === 1 ? 'a number' : 'numbers'}.`,
+      );
+    }
+  }
   if (firstProblem) {
     const error = { ...firstProblem.error };
     if (sameProblems > 0) error.message += ` (${sameProblems} more cell${sameProblems === 1 ? '' : 's'} in the table ${sameProblems === 1 ? 'has' : 'have'} the same problem.)`;

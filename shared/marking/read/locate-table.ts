@@ -23,6 +23,9 @@ export interface LocatedTable {
   warnings: string[];
 }
 
+/** text that stands where a number was meant: NaN, inf, n/a, a dash */
+const NUMBER_PLACEHOLDER = /^([+-]?(nan|inf|infinity)|n\/?a|#n\/a|-+|—|–|\?+|null|none)$/i;
+
 export function isNumberLike(cell: GridCell | undefined): boolean {
   return cell !== undefined && (cell.kind === 'number' || cell.kind === 'date');
 }
@@ -111,15 +114,28 @@ export function locateTable(grid: Grid, options: LocateOptions): LocatedTable {
 
   // downward: the end of the table
   const rows: GridRow[] = [];
+  const numericColumns = new Set<number>();
+  const accept = (row: GridRow) => {
+    rows.push(row);
+    row.cells.forEach((cell, c) => {
+      if (isNumberLike(cell)) numericColumns.add(c);
+    });
+  };
   let end = content.length;
   for (let i = start; i < content.length; i++) {
     const row = content[i];
+    const previous = i > start ? content[i - 1] : null;
+    const afterGap = previous !== null && row.rowNumber - previous.rowNumber > 1;
     if (numberCount(row) >= 1) {
-      rows.push(row);
+      // after an empty row, words where the table has numbers start something else ("Minimum | 0.74")
+      const words = afterGap && row.cells.some((cell, c) => numericColumns.has(c) && cell?.kind === 'text' && !NUMBER_PLACEHOLDER.test(cell.text.trim()));
+      if (words) {
+        end = i;
+        break;
+      }
+      accept(row);
       continue;
     }
-    const previous = i > 0 ? content[i - 1] : null;
-    const afterGap = previous !== null && row.rowNumber - previous.rowNumber > 1;
     let numbersFollow = false;
     for (let k = i + 1; k < content.length; k++) {
       if (content[k].rowNumber - content[k - 1].rowNumber > 1) break;
@@ -132,7 +148,7 @@ export function locateTable(grid: Grid, options: LocateOptions): LocatedTable {
       end = i;
       break;
     }
-    rows.push(row);
+    accept(row);
   }
   if (end < content.length) {
     const rest = content.slice(end);

@@ -210,7 +210,9 @@ function mb(bytes: number): string {
 }
 
 function errorText(error: unknown): string {
-  const text = error instanceof Error ? error.message : String(error);
+  const text = (error instanceof Error ? error.message : String(error))
+    .replace(/^Bug : uncompressed data size mismatch$/, 'its size does not match the zip directory')
+    .replace(/^(Bug|Corrupted zip) ?: ?/i, '');
   return text.length > 120 ? text.slice(0, 117) + '…' : text;
 }
 
