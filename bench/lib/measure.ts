@@ -36,9 +36,19 @@ export function sample(fn: () => void, repeat: number): number {
  * a change in machine load affects all of them alike.
  */
 export function interleavedMedians(fns: ReadonlyArray<{ fn: () => void; repeat: number }>, samples: number): number[] {
+  return interleavedSamples(fns, samples).map(median);
+}
+
+/** the samples themselves (time per call, ms), one array per function, taken in turn */
+export function interleavedSamples(fns: ReadonlyArray<{ fn: () => void; repeat: number }>, samples: number): number[][] {
   const times = fns.map(() => [] as number[]);
   for (let s = 0; s < samples; s++) fns.forEach(({ fn, repeat }, i) => times[i].push(sample(fn, repeat)));
-  return times.map(median);
+  return times;
+}
+
+/** median of the ratios of samples taken side by side: robust to load that drifts during the run */
+export function pairedRatio(numerator: readonly number[], denominator: readonly number[]): number {
+  return median(numerator.map((x, i) => x / denominator[i]));
 }
 
 export function machineLine(): string {
