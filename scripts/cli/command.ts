@@ -19,8 +19,10 @@ export interface CliCommand {
   usage: string;
   /** node:util parseArgs options (string or boolean flags); `help` is added for every command */
   options: NonNullable<ParseArgsConfig['options']>;
+  /** whether bare arguments (e.g. file names) are accepted; default false */
+  allowPositionals?: boolean;
   /** validates `values` (zod) and writes the result; throws CliInputError/RangeError for bad input */
-  run(values: FlagValues, out: CliOutput): void | Promise<void>;
+  run(values: FlagValues, out: CliOutput, positionals: string[]): void | Promise<void>;
 }
 
 /** Bad flags or impossible input: exit status 2 and the message as one line on stderr. */

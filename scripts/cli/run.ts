@@ -99,14 +99,16 @@ export async function runCli(argv: readonly string[], io: CliStreams): Promise<n
   }
   const command = await entry.load();
   let values: Record<string, string | boolean | undefined>;
+  let positionals: string[];
   try {
     const parsed = parseArgs({
       args: joinNegativeValues(rest, command),
       options: { ...command.options, help: { type: 'boolean', short: 'h' } },
       strict: true,
-      allowPositionals: false,
+      allowPositionals: command.allowPositionals ?? false,
     });
     values = parsed.values as Record<string, string | boolean | undefined>;
+    positionals = parsed.positionals;
   } catch (error) {
     io.stderr.write(`error: ${parseArgsMessage(error as Error & { code?: string }, command)}\n`);
     return 2;
@@ -116,7 +118,7 @@ export async function runCli(argv: readonly string[], io: CliStreams): Promise<n
     return 0;
   }
   try {
-    await command.run(values, io.stdout);
+    await command.run(values, io.stdout, positionals);
     return 0;
   } catch (error) {
     const message = oneLine(error instanceof Error ? error.message : String(error));
