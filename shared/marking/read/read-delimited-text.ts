@@ -18,6 +18,8 @@ export interface DelimitedText {
 }
 
 const DIGIT = /\d/;
+/** a data line starts with a number (titles and headers start with words) */
+const STARTS_WITH_NUMBER = /^\s*"?[+\-\u2212]?[.,]?\d/;
 
 export function readDelimitedText(
   input: string,
@@ -104,7 +106,7 @@ function separatorsIn(line: string): number {
 }
 
 /**
- * Separator rule: among lines that hold a digit (titles and headers do not decide), the first of
+ * Separator rule: among lines that start with a number (titles and headers do not decide), the first of
  * tab, semicolon, pipe found on at least 80 % of them wins; then comma, unless comma-split fields
  * still hold two space-separated numbers (a decimal-comma file separated by spaces); then runs of
  * whitespace when the lines hold two or more tokens; else comma (a single column).
@@ -112,7 +114,7 @@ function separatorsIn(line: string): number {
 export function detectDelimiter(lines: string[], preferTab = false): Delimiter {
   const sample: string[] = [];
   for (const line of lines) {
-    if (line.trim() === '' || commentText(line) !== undefined || !DIGIT.test(line)) continue;
+    if (line.trim() === '' || commentText(line) !== undefined || !STARTS_WITH_NUMBER.test(line)) continue;
     sample.push(line);
     if (sample.length >= 50) break;
   }

@@ -60,7 +60,7 @@ async function guarded(bytes: Uint8Array, options: ReadOptions, choice: ReadChoi
     const readError =
       error instanceof ReadRefusal
         ? error.readError
-        : makeReadError('unreadable', `The file could not be read (${error instanceof Error ? error.message.slice(0, 160) : String(error).slice(0, 160)}).`);
+        : makeReadError('unreadable', `The file could not be read (unexpected: ${(error instanceof Error ? error.message : String(error)).slice(0, 160)}).`);
     const failure: ReadResult = { ok: false, error: readError, warnings: state.warnings };
     if (state.table) failure.table = state.table;
     if (state.template) failure.template = state.template;
