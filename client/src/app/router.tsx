@@ -52,6 +52,15 @@ export const routes: RouteObject[] = [
                 }),
               },
               {
+                // Reference explorer: staff only (the loader refuses students); the view lives in the search string.
+                path: 'explorer',
+                shouldRevalidate: skipSearchOnlyChanges,
+                lazy: async () => {
+                  const page = await import('@client/features/explorer/routes/explorer-page');
+                  return { loader: page.explorerLoader, Component: page.ExplorerPage };
+                },
+              },
+              {
                 path: 'admin/people',
                 loader: ({ request }) => requireAdmin(request),
                 shouldRevalidate: skipSearchOnlyChanges,
