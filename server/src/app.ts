@@ -19,6 +19,9 @@ import { sessionRoutes } from './modules/session/routes';
 import { adminRoutes } from './modules/admin/routes';
 import { courseRoutes, termRoutes } from './modules/courses/routes';
 import { healthRoutes } from './modules/health/routes';
+import { reportRoutes } from './modules/reports/routes';
+import { similarityRoutes } from './modules/similarity/routes';
+import { jobRoutes } from './platform/jobs/routes';
 import { templateRoutes } from './modules/templates/routes';
 import { courseExerciseRoutes, exerciseRoutes } from './modules/exercises/routes';
 
@@ -77,6 +80,8 @@ export async function createApp(deps: AppDeps): Promise<BuiltApp> {
   api.use('/', sessionRoutes(deps.db, auth.generateCsrfToken));
   api.use('/admin', adminRoutes(deps.db));
   api.use('/courses', courseRoutes(deps.db));
+  api.use('/', reportRoutes(deps.db), similarityRoutes(deps.db));
+  api.use('/jobs', jobRoutes(deps.db));
   api.use('/', templateRoutes(deps.db));
   api.use('/terms', termRoutes(deps.db));
   api.use('/courses', courseExerciseRoutes(deps.db));

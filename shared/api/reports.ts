@@ -57,6 +57,8 @@ export type ReadColumn = z.infer<typeof readColumnSchema>;
 
 export const unitSourceSchema = z.enum(['header', 'magnitude', 'template', 'user']);
 
+export const answersSchema = z.record(z.string(), z.union([z.string(), z.number(), z.null()]).optional());
+
 /** One curve of points as read, in the units the student chose (for the preview plot). */
 export const pointSeriesSchema = z.object({
   key: z.string(),
@@ -78,16 +80,20 @@ export const readPreviewSchema = z.object({
     columns: z.array(readColumnSchema),
     /** the first table rows as shown in the file */
     preview: z.array(z.object({ rowNumber: z.number().int(), cells: z.array(z.string()) })),
-  }),
-  choice: z.object({ sheet: z.string().nullable(), distanceColumn: z.string(), energyColumns: z.array(z.string()) }),
-  units: z.object({ distance: reportDistanceUnitSchema, energy: reportEnergyUnitSchema, distanceSource: unitSourceSchema, energySource: unitSourceSchema }),
-  convention: energyConventionSchema,
+  })
+    /** null when the file holds answers only (MO diagram and Hückel exercises) */
+    .nullable(),
+  choice: z.object({ sheet: z.string().nullable(), distanceColumn: z.string(), energyColumns: z.array(z.string()) }).nullable(),
+  units: z.object({ distance: reportDistanceUnitSchema, energy: reportEnergyUnitSchema, distanceSource: unitSourceSchema, energySource: unitSourceSchema }).nullable(),
+  convention: energyConventionSchema.nullable(),
   warnings: z.array(z.string()),
   pointCount: z.number().int(),
   /** the student's points in the chosen units (at most 1,000 per curve), for the preview plot */
   series: z.array(pointSeriesSchema),
   /** set when the file is a personal template (the token is never echoed) */
   template: z.object({ exerciseId: z.string(), variantKey: z.string(), studentNumber: z.string() }).nullable(),
+  /** answers read from the template's answer cells, by name */
+  answers: answersSchema.nullable(),
   /** the student this upload is for */
   enrolment: z.object({ id: z.number().int(), studentNumber: z.string(), displayName: z.string() }),
 });
@@ -178,7 +184,7 @@ export const reportSummarySchema = z.object({
   onBehalf: z.boolean(),
   dataFile: storedFileSchema.extend({ sha256: z.string() }),
   writeup: storedFileSchema.extend({ sha256: z.string() }).nullable(),
-  units: z.object({ distance: reportDistanceUnitSchema, energy: reportEnergyUnitSchema }),
+  units: z.object({ distance: reportDistanceUnitSchema, energy: reportEnergyUnitSchema }).nullable(),
   convention: energyConventionSchema,
   pointCount: z.number().int(),
   warnings: z.array(z.string()),
@@ -243,9 +249,10 @@ export const reportDetailSchema = z.object({
   student: z.object({ enrolmentId: z.number().int(), studentNumber: z.string(), displayName: z.string() }),
   variantKey: z.string(),
   reading: z.object({
-    choice: z.object({ sheet: z.string().nullable(), distanceColumn: z.string(), energyColumns: z.array(z.string()) }),
+    choice: z.object({ sheet: z.string().nullable(), distanceColumn: z.string(), energyColumns: z.array(z.string()) }).nullable(),
     columns: z.array(readColumnSchema),
-    unitSources: z.object({ distance: unitSourceSchema, energy: unitSourceSchema }),
+    unitSources: z.object({ distance: unitSourceSchema, energy: unitSourceSchema }).nullable(),
+    answers: answersSchema.nullable(),
   }),
   /** null for a student until the report is returned; null when the exercise has no curve */
   overlay: overlaySchema.nullable(),
