@@ -21,7 +21,7 @@ const ids = {} as Record<string, number>;
 const XLSX_TYPE = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
 
 const late = { graceMinutes: 15, penaltyPerDayPercent: 10, capPercent: 50 };
-const scheme = { checks: [{ kind: 'curve-rms', id: 'rms', label: 'Curve RMS', weight: 1, full: 0.001, zero: 0.01 }] };
+const scheme: ExerciseSpecInput['scheme'] = { checks: [{ kind: 'curve-rms', id: 'rms', label: 'Curve RMS', weight: 1, full: 0.001, zero: 0.01 }] };
 
 /** a wall-clock time `days` from now, in UTC, as YYYY-MM-DDTHH:MM */
 const utcLocal = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 16);

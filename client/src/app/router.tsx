@@ -52,6 +52,12 @@ export const routes: RouteObject[] = [
                 }),
               },
               {
+                path: 'my/exercises',
+                lazy: async () => ({
+                  Component: (await import('@client/features/my-exercises/routes/my-exercises-page')).MyExercisesPage,
+                }),
+              },
+              {
                 // Reference explorer: staff only (the loader refuses students); the view lives in the search string.
                 path: 'explorer',
                 shouldRevalidate: skipSearchOnlyChanges,
