@@ -1,3 +1,4 @@
+import { Link } from 'react-router';
 import type { CourseSummary } from '@shared/api';
 import { Num } from '@client/components/ui/num';
 import { RoleBadge } from '@client/components/ui/role-badge';
@@ -37,9 +38,15 @@ export function CoursesTable({
           courses.map((course) => (
             <tr key={course.id} data-testid="course-row" data-course-id={course.id} className="hover:bg-paper">
               <Td className="whitespace-nowrap">
-                <Num className="font-medium">{course.code}</Num>
+                <Link to={`/courses/${course.id}`} className="font-medium">
+                  <Num>{course.code}</Num>
+                </Link>
               </Td>
-              <Td className="min-w-[16rem]">{course.title}</Td>
+              <Td className="min-w-[16rem]">
+                <Link to={`/courses/${course.id}`} className="text-ink no-underline hover:underline">
+                  {course.title}
+                </Link>
+              </Td>
               <Td className="whitespace-nowrap">
                 <div>{course.term.name}</div>
                 <div className="text-[0.8rem] text-graphite">

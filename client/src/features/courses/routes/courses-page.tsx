@@ -1,10 +1,12 @@
 import { useMemo } from 'react';
+import { Link } from 'react-router';
+import { buttonClasses } from '@client/components/ui/button';
 import { EmptyState } from '@client/components/ui/empty-state';
 import { ErrorNotice } from '@client/components/ui/error-notice';
 import { Num } from '@client/components/ui/num';
 import { PageHeader } from '@client/components/ui/page-header';
 import { useCurrentUser } from '@client/features/session/api/get-me';
-import { isStaff } from '@client/features/session/lib/roles';
+import { hasRole, isStaff } from '@client/features/session/lib/roles';
 import { formatCount } from '@client/lib/format';
 import { useCourses } from '../api/get-courses';
 import { CoursesTable } from '../components/courses-table';
@@ -15,6 +17,8 @@ export function CoursesPage() {
   const staff = isStaff(me);
   const courses = useCourses();
   const title = staff ? 'Courses' : 'My courses';
+  // admins, and lecturers (the server checks again)
+  const canCreate = hasRole(me, 'admin') || hasRole(me, 'lecturer');
 
   const counts = useMemo(() => {
     const list = courses.data ?? [];
@@ -34,12 +38,19 @@ export function CoursesPage() {
             : 'The courses you are enrolled on.'
         }
         actions={
-          courses.data && courses.data.length > 0 ? (
-            <p className="text-sm text-graphite" data-testid="courses-count">
-              <Num>{formatCount(counts.total)}</Num> {counts.total === 1 ? 'course' : 'courses'},{' '}
-              <Num>{formatCount(counts.running)}</Num> running
-            </p>
-          ) : null
+          <>
+            {courses.data && courses.data.length > 0 ? (
+              <p className="text-sm text-graphite" data-testid="courses-count">
+                <Num>{formatCount(counts.total)}</Num> {counts.total === 1 ? 'course' : 'courses'},{' '}
+                <Num>{formatCount(counts.running)}</Num> running
+              </p>
+            ) : null}
+            {canCreate ? (
+              <Link to="/courses/new" className={`${buttonClasses('primary', 'sm')} no-underline`}>
+                New course
+              </Link>
+            ) : null}
+          </>
         }
       />
       {courses.isError ? (
