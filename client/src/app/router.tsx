@@ -52,6 +52,24 @@ export const routes: RouteObject[] = [
                 }),
               },
               {
+                path: 'courses/new',
+                lazy: async () => ({ Component: (await import('@client/features/courses/routes/new-course-page')).NewCoursePage }),
+              },
+              {
+                // The course page: header and tabs; each tab is a child route rendered in its <Outlet/>.
+                path: 'courses/:courseId',
+                shouldRevalidate: skipSearchOnlyChanges,
+                lazy: async () => ({ Component: (await import('@client/features/courses/routes/course-layout')).CourseLayout }),
+                children: [
+                  { index: true, lazy: async () => ({ Component: (await import('@client/features/courses/routes/course-index')).CourseIndex }) },
+                  { path: 'sections', lazy: async () => ({ Component: (await import('@client/features/sections/routes/sections-page')).SectionsPage }) },
+                  { path: 'roster', lazy: async () => ({ Component: (await import('@client/features/roster/routes/roster-page')).RosterPage }) },
+                  { path: 'roster/import', lazy: async () => ({ Component: (await import('@client/features/roster/routes/roster-import-page')).RosterImportPage }) },
+                  { path: 'settings', lazy: async () => ({ Component: (await import('@client/features/courses/routes/course-settings-page')).CourseSettingsPage }) },
+                  // 'exercises' (/courses/:courseId/exercises) belongs to the exercises feature: register it here, as a child.
+                ],
+              },
+              {
                 path: 'my/exercises',
                 lazy: async () => ({
                   Component: (await import('@client/features/my-exercises/routes/my-exercises-page')).MyExercisesPage,
