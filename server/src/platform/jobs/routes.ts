@@ -1,7 +1,7 @@
 /**
  * GET /api/v1/jobs/:jobId → progress of a background job (a progress bar's data).
- * Staff (lecturers, assistants) of the course named in the job's payload and
- * admins may read it; a job that names no course is for admins only.
+ * Staff (lecturers, assistants) of the course named in the job's payload
+ * (`courseId`, or the course of its `exerciseId`) and admins may read it; a job that names no course is for admins only.
  */
 import { Router } from 'express';
 import type { Knex } from 'knex';
@@ -20,7 +20,11 @@ export function jobRoutes(db: Knex): Router {
     const { jobId } = req.params as unknown as { jobId: number };
     const job = await getJob(db, jobId);
     if (!job) throw notFound(`Job ${jobId} does not exist.`);
-    const courseId = Number(job.payload.courseId);
+    let courseId = Number(job.payload.courseId);
+    if (!(courseId > 0) && Number(job.payload.exerciseId) > 0) {
+      // a job about an exercise belongs to the exercise's course
+      courseId = Number((await db('exercises').where({ id: Number(job.payload.exerciseId) }).first('course_id'))?.course_id);
+    }
     if (Number.isInteger(courseId) && courseId > 0) await assertCourseRole(db, req, courseId, ['lecturer', 'assistant']);
     else if (!req.user!.isAdmin) throw forbidden('Only department admins can see this job.');
     const body: JobProgress = {
