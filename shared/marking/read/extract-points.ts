@@ -37,6 +37,7 @@ interface Problem {
 }
 
 function cellProblem(cell: GridCell | undefined, row: GridRow, column: number, letter: string, ctx: ExtractContext): Problem | null {
+  if (cell !== undefined && cell.kind === 'number') return null;
   const where = place(ctx.sheet, row.rowNumber, letter);
   const expected = ctx.expected(column);
   const at = { sheet: ctx.sheet, row: row.rowNumber, column: letter, expected };
@@ -92,6 +93,7 @@ export function extractPoints(table: LocatedTable, plan: ColumnPlan, ctx: Extrac
     );
   }
 
+  const chosen = [d, ...energyColumns];
   let firstProblem: Problem | null = null;
   let sameProblems = 0;
   const rowNumbers: number[] = [];
@@ -99,8 +101,10 @@ export function extractPoints(table: LocatedTable, plan: ColumnPlan, ctx: Extrac
   const energies: number[][] = energyColumns.map(() => []);
   for (let i = 0; i < end; i++) {
     const row = rows[i];
-    for (const c of [d, ...energyColumns]) {
-      const problem = cellProblem(row.cells[c], row, c, letter(c), ctx);
+    for (const c of chosen) {
+      const cell = row.cells[c];
+      if (cell !== undefined && cell.kind === 'number') continue;
+      const problem = cellProblem(cell, row, c, letter(c), ctx);
       if (!problem) continue;
       if (!firstProblem) firstProblem = problem;
       else if (problem.code === firstProblem.code) sameProblems++;
