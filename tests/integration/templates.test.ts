@@ -324,21 +324,41 @@ describe('answer cells of diatomic and Hückel templates', () => {
     expect(String(wb.getWorksheet('About')!.getCell('B9').value)).toMatch(/^\+2 d: your own due moment is /);
   });
 
-  it('asks for one x per pi orbital of the student’s system', async () => {
+  it('asks for the x of every pi orbital of the student’s system in one answer cell', async () => {
     const stu1 = await ctx.signIn('stu1');
     const r = await download(stu1, `/api/v1/exercises/${ids.exHuckel}/template`);
     expect(r.status).toBe(200);
     const wb = await workbookOf(r.bytes);
     const meta = metaOf(wb);
-    const energyCells = [...meta].filter(([k]) => k.startsWith('answer:huckel-energies:'));
+    expect([...meta].filter(([k]) => k.startsWith('answer:'))).toEqual([
+      ['answer:huckel-energies', 'Answers!B5'],
+      ['answer:pi-energy', 'Answers!B6'],
+      ['answer:delocalization-energy', 'Answers!B7'],
+    ]);
+    const answers = wb.getWorksheet('Answers')!;
     // hexatriene: six carbon p orbitals, six pi orbitals
-    expect(energyCells).toEqual([1, 2, 3, 4, 5, 6].map((i) => [`answer:huckel-energies:${i}`, `Answers!B${4 + i}`]));
-    expect(meta.get('answer:pi-energy')).toBe('Answers!B11');
-    expect(meta.get('answer:delocalization-energy')).toBe('Answers!B12');
+    expect(answers.getCell('A5').value).toBe('Orbital energies: x for each of the 6 pi orbitals');
+    expect(answers.getCell('B5').numFmt).toBe('@');
     const about = new Map<string, unknown>();
     wb.getWorksheet('About')!.eachRow((row) => about.set(String(row.getCell(1).value), row.getCell(2).value));
     expect(about.get('Pi system')).toBe('chain of 6');
     expect(about.get('Pi electrons')).toBe(6);
+  });
+
+  it('hands typed answers to the report reader by their check kind', async () => {
+    const { readReport } = await import('@shared/marking/read');
+    const stu1 = await ctx.signIn('stu1');
+    const r = await download(stu1, `/api/v1/exercises/${ids.exHuckel}/template`);
+    const wb = await workbookOf(r.bytes);
+    // what a student types: x = 2cos(kπ/7), k = 1…6 (closed form for chains, science.md §5), to 3 decimals
+    wb.getWorksheet('Answers')!.getCell('B5').value = '1.802, 1.247, 0.445, -0.445, -1.247, -1.802';
+    // 2·(1.802 + 1.247 + 0.445), computed from the line above
+    wb.getWorksheet('Answers')!.getCell('B6').value = 6.988;
+    const read = await readReport(new Uint8Array(await wb.xlsx.writeBuffer()), { fileName: 'pi.xlsx' });
+    expect(read.template?.studentNumber).toBe('2400101');
+    expect(read.template?.answers['huckel-energies']).toEqual({ cell: 'Answers!B5', value: '1.802, 1.247, 0.445, -0.445, -1.247, -1.802' });
+    expect(read.template?.answers['pi-energy']).toEqual({ cell: 'Answers!B6', value: 6.988 });
+    expect(read.template?.answers['delocalization-energy']).toEqual({ cell: 'Answers!B7', value: null });
   });
 });
 

@@ -125,10 +125,13 @@ interface AnswerRow {
   question: string;
   form: string;
   validation?: ExcelJS.DataValidation;
+  /** kept as typed (text format), e.g. a list of numbers or a term symbol */
+  text?: boolean;
 }
 
 const DIATOMIC_QUESTIONS: Record<'configuration' | 'bond-order' | 'unpaired-electrons' | 'term-symbol', Omit<AnswerRow, 'name'>> = {
   configuration: {
+    text: true,
     question: 'Ground-state electron configuration',
     form: 'Occupied orbitals, lowest first, each in brackets with its electron count; σ, π and * or plain "sigma", "pi" and "*".',
   },
@@ -143,6 +146,7 @@ const DIATOMIC_QUESTIONS: Record<'configuration' | 'bond-order' | 'unpaired-elec
     validation: { type: 'whole', operator: 'between', formulae: [0, 50], allowBlank: true, showErrorMessage: true, errorTitle: 'A whole number, please', error: 'The number of unpaired electrons is a whole number.' },
   },
   'term-symbol': {
+    text: true,
     question: 'Ground term symbol',
     form: 'Multiplicity, Λ, then g/u and ± where they apply: the form of 4Delta_u or ⁴Δu (an example of the form only).',
   },
@@ -158,17 +162,16 @@ function answerRows(input: TemplateInput): AnswerRow[] {
   }
   if (spec.model.family === 'huckel' && variant.family === 'huckel') {
     const { atomCount } = piSystemCounts(variant.system);
-    const rows: AnswerRow[] = Array.from({ length: atomCount }, (_, i) => ({
-      name: `huckel-energies:${i + 1}`,
-      question: `Orbital ψ${i + 1}: x`,
-      form: i === 0 ? 'E = α + xβ; lowest energy (largest x) first; a degenerate level gets one row per orbital' : '',
-      validation: anyNumber('x'),
-    }));
-    rows.push(
+    return [
+      {
+        name: 'huckel-energies',
+        question: `Orbital energies: x for each of the ${atomCount} pi orbitals`,
+        form: `${atomCount} values of x in E = α + xβ, lowest energy (largest x) first, separated by commas; repeat a degenerate level once per orbital. "α + 1.5β" forms are read too.`,
+        text: true,
+      },
       { name: 'pi-energy', question: 'Total π energy: y in Nα + yβ', form: 'A number (the coefficient of β)', validation: anyNumber('The π energy') },
       { name: 'delocalization-energy', question: 'Delocalization energy, in units of β', form: 'A number; against isolated double bonds', validation: anyNumber('The delocalization energy') },
-    );
-    return rows;
+    ];
   }
   return [];
 }
@@ -333,6 +336,7 @@ export async function buildTemplate(input: TemplateInput): Promise<BuiltTemplate
       cell.fill = INPUT_FILL;
       cell.border = THIN;
       if (a.validation) cell.dataValidation = a.validation;
+      if (a.text) cell.numFmt = '@';
       answerCells[a.name] = `${ANSWERS_SHEET}!B${r}`;
     });
   }
