@@ -33,11 +33,30 @@ export async function seedDemo(knex: Knex, issuer: string): Promise<void> {
       { course_id: moTheory, user_id: id('l.ferrante'), role: 'assistant' },
     ]);
 
-    const enrol = (courseId: number, p: DemoPerson) => ({ course_id: courseId, user_id: id(p.login), student_number: p.login === 'student' ? '2400001' : p.login.slice(1), status: 'active' });
-    const rows = [enrol(physChem, demoRoleAccounts[3])];
-    demoStudents.slice(0, 40).forEach((p) => rows.push(enrol(physChem, p)));
-    demoStudents.slice(40).forEach((p) => rows.push(enrol(moTheory, p)));
-    rows.push(enrol(moTheory, demoRoleAccounts[3]));
+    // Lab sections: two for CHEM 2140 (the demo assistant teaches Lab A, where the demo student is), one for CHEM 3310.
+    const section = async (courseId: number, name: string, weekday: number, startsAt: string, endsAt: string, room: string, assistant: string) => {
+      const [sectionId] = await trx('sections').insert({ course_id: courseId, name, weekday, starts_at: startsAt, ends_at: endsAt, room, capacity: 24 });
+      await trx('section_assistants').insert({ section_id: sectionId, user_id: id(assistant) });
+      return sectionId as number;
+    };
+    const labA = await section(physChem, 'Lab A', 2, '09:00', '12:00', 'Hartree Building C-204', 'assistant');
+    const labB = await section(physChem, 'Lab B', 4, '14:00', '17:00', 'Hartree Building C-204', 'a.boateng');
+    const labM = await section(moTheory, 'Lab M', 3, '13:00', '16:00', 'Hartree Building C-118', 'l.ferrante');
+
+    const enrol = (courseId: number, p: DemoPerson, sectionId: number) => ({
+      course_id: courseId,
+      user_id: id(p.login),
+      student_number: p.login === 'student' ? '2400001' : p.login.slice(1),
+      family_name: p.familyName,
+      given_name: p.givenName,
+      email: p.email,
+      section_id: sectionId,
+      status: 'active',
+    });
+    const rows = [enrol(physChem, demoRoleAccounts[3], labA)];
+    demoStudents.slice(0, 40).forEach((p, i) => rows.push(enrol(physChem, p, i % 2 === 0 ? labA : labB)));
+    demoStudents.slice(40).forEach((p) => rows.push(enrol(moTheory, p, labM)));
+    rows.push(enrol(moTheory, demoRoleAccounts[3], labM));
     await trx('enrolments').insert(rows);
 
     await trx('audit_log').insert({ actor_id: null, action: 'demo.seeded', entity_type: 'site', entity_id: null, after_json: JSON.stringify({ people: ids.size }) });
