@@ -1,16 +1,18 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { AddStaffBody, CourseDetail, CreateCourseBody, StaffRole, UpdateCourseBody } from '@shared/api/courses';
 import { apiFetch, apiPost } from '@client/lib/api';
+import { meQueryKey } from '@client/features/session/api/get-me';
 import { courseQueryKey } from './get-course';
 
-/** Every change to a course refreshes the course list and the course itself (['courses', ...]). */
+/** Every change to a course refreshes the course list, the course itself (['courses', ...]) and /me. */
 function useCourseMutation<TVars>(fn: (vars: TVars) => Promise<CourseDetail>) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: fn,
     onSuccess: (course) => {
       queryClient.setQueryData(courseQueryKey(course.id), course);
-      return queryClient.invalidateQueries({ queryKey: ['courses'] });
+      // the dashboard and navigation read the person's courses and roles from /me
+      return Promise.all([queryClient.invalidateQueries({ queryKey: ['courses'] }), queryClient.invalidateQueries({ queryKey: meQueryKey })]);
     },
   });
 }
