@@ -44,8 +44,6 @@ function cellProblem(cell: GridCell | undefined, row: GridRow, column: number, l
   const make = (code: ReadErrorCode, message: string): Problem => ({ code, error: makeReadError(code, message, at) });
   if (cell === undefined) return make('missing_value', `${where} is empty; expected ${expected}.`);
   switch (cell.kind) {
-    case 'number':
-      return null;
     case 'date':
       return make(
         'date_in_numeric_cell',
