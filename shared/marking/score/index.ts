@@ -1,0 +1,10 @@
+export { markReport, MARKING_VERSION } from './mark-report';
+export type { MarkReportInput, MarkResult, CheckResult, CurveSummary, MarkableReading, ReportAnswers, ReferenceEvaluation } from './types';
+export { creditFraction, roundPoints, type ToleranceRule } from './credit';
+export { defaultCurveScheme } from './default-scheme';
+export { curveReferenceAt } from './curve-reference-at';
+export { referenceEnergiesAt, type ReferenceAtDistances } from './reference-values';
+export { pairColumns, curveStateFromHeader, type Pairing, type StudentCurve } from './student-curves';
+export { compareConfiguration, readConfigurationTerms, type ConfigurationReading } from './parse-configuration';
+export { parseAnswerNumber, parseAnswerCount } from './parse-count';
+export { parseHuckelEnergies, type HuckelEnergiesReading } from './parse-huckel-energies';
