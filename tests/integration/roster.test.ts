@@ -315,6 +315,26 @@ describe('re-import', () => {
   });
 });
 
+describe('one transaction', () => {
+  it('leaves nothing behind when the database fails on the last row of an apply', async () => {
+    // a trigger that refuses one student number: the rows before it were already written inside the transaction
+    await ctx.db.knex.raw(`CREATE TRIGGER refuse_one_enrolment BEFORE INSERT ON enrolments FOR EACH ROW
+      IF NEW.student_number = '2699999' THEN SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'refused by the test'; END IF`);
+    try {
+      const csv = ['Student number,Family name,Given name,E-mail', '2699997,Mensah,Ama,ama.mensah@students.example.org', '2699998,Rossi,Dario,dario.rossi@students.example.org', '2699999,Tanaka,Yui,yui.tanaka@students.example.org'].join('\n');
+      const before = await snapshot();
+      const audits = await count('audit_log', { action: 'roster.imported' });
+      const r = await send('lec1', 'apply', Buffer.from(csv), 'fails-late.csv', { mapping: JSON.stringify({ ...STANDARD, section: null }) });
+      expect(r.status).toBe(500);
+      expect(await snapshot()).toEqual(before);
+      expect(await count('audit_log', { action: 'roster.imported' })).toBe(audits);
+      expect(await count('users', { email: 'ama.mensah@students.example.org' })).toBe(0);
+    } finally {
+      await ctx.db.knex.raw('DROP TRIGGER IF EXISTS refuse_one_enrolment');
+    }
+  });
+});
+
 describe('a 60-student XLSX roster', () => {
   it('imports all sixty in one transaction, placed in three groups', async () => {
     const wb = new ExcelJS.Workbook();
