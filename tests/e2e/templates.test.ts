@@ -82,7 +82,7 @@ describe('My exercises in a browser', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My exercises' }).click();
     await page.waitForURL(`${ctx.baseUrl}/my/exercises`);
     const row = page.getByTestId('my-exercise-row');
-    await expect.poll(() => row.count()).toBe(1);
+    await expect.poll(() => row.count(), { timeout: 20_000 }).toBe(1);
     const text = await row.innerText();
     expect(text).toContain('Hydrogen molecule ion');
     expect(text).toContain('TST 410');
@@ -112,7 +112,7 @@ describe('My exercises in a browser', () => {
   it('a student with no published exercises sees the empty state', async () => {
     const page = await signInAs('stu2');
     await page.goto(`${ctx.baseUrl}/my/exercises`);
-    await expect.poll(() => page.getByTestId('my-exercises-empty').count()).toBe(1);
+    await expect.poll(() => page.getByTestId('my-exercises-empty').count(), { timeout: 20_000 }).toBe(1);
     expect(await page.getByTestId('my-exercises-empty').innerText()).toContain('No exercises yet');
     await page.close();
   });
