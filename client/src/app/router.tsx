@@ -76,6 +76,15 @@ export const routes: RouteObject[] = [
                 }),
               },
               {
+                // a student's upload page (staff: ?enrolmentId= to upload for a student)
+                path: 'my/exercises/:exerciseId/upload',
+                lazy: async () => ({ Component: (await import('@client/features/reports/routes/upload-page')).UploadReportPage }),
+              },
+              {
+                path: 'reports/:reportId',
+                lazy: async () => ({ Component: (await import('@client/features/reports/routes/report-page')).ReportPage }),
+              },
+              {
                 // Reference explorer: staff only (the loader refuses students); the view lives in the search string.
                 path: 'explorer',
                 shouldRevalidate: skipSearchOnlyChanges,
