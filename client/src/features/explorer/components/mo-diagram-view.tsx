@@ -32,14 +32,14 @@ export function MoDiagramView({ diagram, distanceUnit = 'angstrom', downloads = 
       <PlotFrame title={`MO diagram of ${diagram.display}`} csv={() => moLevelsCsv(diagram)} downloads={downloads} testId="mo-diagram-frame">
         <MoDiagramSvg diagram={diagram} />
       </PlotFrame>
-      <div className="grid content-start gap-3">
+      <div className="grid min-w-0 content-start gap-3">
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5 rounded-[3px] border border-rule bg-sheet px-3 py-2 text-[0.92rem]" data-testid="mo-answers">
           <dt className="text-graphite">Configuration</dt>
-          <dd className="break-words" data-testid="answer-configuration">
+          <dd className="[overflow-wrap:anywhere]" data-testid="answer-configuration">
             {diagram.configuration}
           </dd>
           <dt className="text-graphite">Valence form</dt>
-          <dd className="break-words">{diagram.valenceConfiguration}</dd>
+          <dd className="[overflow-wrap:anywhere]">{diagram.valenceConfiguration}</dd>
           <dt className="text-graphite">Bond order</dt>
           <dd data-testid="answer-bond-order">
             <Num>{formatBondOrder(diagram.bondOrder)}</Num>{' '}

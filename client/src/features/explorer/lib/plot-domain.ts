@@ -10,10 +10,16 @@ export interface DomainSeries {
   y: readonly number[];
 }
 
-/** [lower, upper] of the y axis for curves, in the series' own unit. */
-export function curveEnergyDomain(series: readonly DomainSeries[], headroom = 0.8): [number, number] {
+/**
+ * [lower, upper] of the y axis for curves, in the series' own unit: from just
+ * under the lowest point up to `headroom` well depths above the lowest
+ * long-distance end (so that an antibonding curve shows over a good stretch),
+ * and at least up to the highest long-distance end; never above the data.
+ */
+export function curveEnergyDomain(series: readonly DomainSeries[], headroom = 2): [number, number] {
   let lowest = Infinity;
   let highest = -Infinity;
+  let tailLowest = Infinity;
   let tailHighest = -Infinity;
   for (const s of series) {
     let lastX = -Infinity;
@@ -27,11 +33,14 @@ export function curveEnergyDomain(series: readonly DomainSeries[], headroom = 0.
         lastY = y;
       }
     });
-    if (Number.isFinite(lastY)) tailHighest = Math.max(tailHighest, lastY);
+    if (Number.isFinite(lastY)) {
+      tailHighest = Math.max(tailHighest, lastY);
+      tailLowest = Math.min(tailLowest, lastY);
+    }
   }
   if (!Number.isFinite(lowest)) return [0, 1];
   let upper = highest;
-  if (Number.isFinite(tailHighest) && tailHighest > lowest) upper = Math.min(highest, tailHighest + headroom * (tailHighest - lowest));
+  if (Number.isFinite(tailLowest) && tailLowest > lowest) upper = Math.min(highest, Math.max(tailHighest, tailLowest + headroom * (tailLowest - lowest)));
   if (!(upper > lowest)) upper = lowest + Math.max(Math.abs(lowest) * 0.05, 1e-6);
   const pad = (upper - lowest) * 0.05;
   return [lowest - pad, upper + pad];

@@ -141,8 +141,12 @@ function Controls({ state, update, graphErrors }: { state: ExplorerState; update
         className="sm:col-span-2"
         testId="explorer-family"
       />
-      <SelectField label="Distance unit" value={state.distanceUnit} options={distanceUnits.map((u) => ({ value: u, label: distanceUnitOptionLabel[u] }))} onChange={(distanceUnit) => update({ distanceUnit })} />
-      <SelectField label="Energy unit" value={state.energyUnit} options={energyUnits.map((u) => ({ value: u, label: energyUnitOptionLabel[u] }))} onChange={(energyUnit) => update({ energyUnit })} />
+      {state.family !== 'huckel' ? (
+        <SelectField label="Distance unit" value={state.distanceUnit} options={distanceUnits.map((u) => ({ value: u, label: distanceUnitOptionLabel[u] }))} onChange={(distanceUnit) => update({ distanceUnit })} />
+      ) : null}
+      {curves ? (
+        <SelectField label="Energy unit" value={state.energyUnit} options={energyUnits.map((u) => ({ value: u, label: energyUnitOptionLabel[u] }))} onChange={(energyUnit) => update({ energyUnit })} />
+      ) : null}
       {state.family === 'one-electron' ? (
         <>
           <NumberField label="Charge Za" value={state.za} min={LIMITS.charge.min} max={LIMITS.charge.max} step={0.5} onCommit={(za) => update({ za })} />
