@@ -5,9 +5,9 @@
  * a saved exercise the state changes (publish, close, reopen) with their
  * confirmations, and saving a published one asks before re-marking.
  */
-import { useEffect, useId, useMemo, useRef, useState } from 'react';
-import { checkedExerciseSpecSchema, remarkConfirmationDetailsSchema, type ExerciseMutationResponse, type StaffExercise } from '@shared/api/exercises';
-import { uploadFileTypes, type ExerciseSpecInput } from '@shared/exercises/spec';
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { checkedExerciseSpecSchema, exerciseSpecEngineIssues, remarkConfirmationDetailsSchema, type ExerciseMutationResponse, type StaffExercise } from '@shared/api/exercises';
+import { modelSpecSchema, uploadFileTypes, type ExerciseSpecInput, type ModelSpec } from '@shared/exercises/spec';
 import { Button } from '@client/components/ui/button';
 import { Num } from '@client/components/ui/num';
 import { StatusText } from '@client/components/ui/status-text';
@@ -137,8 +137,11 @@ export function ExerciseEditor({
 
   const errorList = [...issues.entries()];
   const zones = useMemo(() => timeZoneOptions(spec.timeZone ?? 'Europe/London'), [spec.timeZone]);
-  const dueId = useId();
-  const parsedModel = parsed.success ? parsed.data.model : null;
+  // the preview needs only a valid model (a missing title must not hide it)
+  const parsedModel = useMemo((): ModelSpec | null => {
+    const m = modelSpecSchema.safeParse(spec.model);
+    return m.success && exerciseSpecEngineIssues({ model: m.data, scheme: { checks: [] } }).length === 0 ? m.data : null;
+  }, [spec.model]);
   const counts = exercise?.counts;
 
   return (
@@ -238,7 +241,7 @@ export function ExerciseEditor({
           <Fieldset legend="Hand-in and lateness">
             <div className="grid gap-3 sm:grid-cols-2">
               <FieldShell path="dueLocal" label="Due" issues={issues} hint="Wall-clock time in the time zone beside.">
-                {(a11y) => <input {...a11y} id={a11y.id ?? dueId} type="datetime-local" value={spec.dueLocal} onChange={(e) => set('dueLocal', e.target.value)} className={`${inputClasses} num`} />}
+                {(a11y) => <input {...a11y} type="datetime-local" value={spec.dueLocal} onChange={(e) => set('dueLocal', e.target.value)} className={`${inputClasses} num`} />}
               </FieldShell>
               <SelectField path="timeZone" label="Time zone" issues={issues} value={spec.timeZone ?? 'Europe/London'} onChange={(v) => set('timeZone', v)} options={zones.map((z) => [z, z.replace(/_/g, ' ')] as const)} />
               <NumberField path="late.graceMinutes" label="Grace period" unit="minutes" issues={issues} value={spec.late.graceMinutes} onChange={(v) => set('late', { ...spec.late, graceMinutes: v })} />
