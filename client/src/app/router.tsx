@@ -67,7 +67,14 @@ export const routes: RouteObject[] = [
                   { path: 'roster/import', lazy: async () => ({ Component: (await import('@client/features/roster/routes/roster-import-page')).RosterImportPage }) },
                   { path: 'settings', lazy: async () => ({ Component: (await import('@client/features/courses/routes/course-settings-page')).CourseSettingsPage }) },
                   // 'exercises' (/courses/:courseId/exercises) belongs to the exercises feature: register it here, as a child.
+                  { path: 'exercises', lazy: async () => ({ Component: (await import('@client/features/exercises/routes/course-exercises-page')).CourseExercisesRoute }) },
+                  { path: 'exercises/new', lazy: async () => ({ Component: (await import('@client/features/exercises/routes/new-exercise-page')).NewExercisePage }) },
                 ],
+              },
+              {
+                // one exercise: the editor for staff, the brief for students
+                path: 'exercises/:exerciseId',
+                lazy: async () => ({ Component: (await import('@client/features/exercises/routes/exercise-page')).ExercisePage }),
               },
               {
                 path: 'my/exercises',
