@@ -170,7 +170,7 @@ export function locateTable(grid: Grid, options: LocateOptions): LocatedTable {
   if (headerCandidate) {
     headerRow = headerCandidate.rowNumber;
     columnCount = Math.max(columnCount, headerCandidate.cells.length);
-    const texts = headerCandidate.cells.map((c) => (c ? cellDisplay(c).trim() : ''));
+    const texts = headerCandidate.cells.map((c) => (c ? clipHeader(cellDisplay(c).trim()) : ''));
     const filledTexts = texts.filter((t) => t !== '');
     const namesRow = headerIndex > 0 ? content[headerIndex - 1] : null;
     const unitsOnly =
@@ -181,7 +181,7 @@ export function locateTable(grid: Grid, options: LocateOptions): LocatedTable {
       });
     if (unitsOnly && namesRow && namesRow.rowNumber === headerRow - 1 && numberCount(namesRow) === 0) {
       for (let c = 0; c < columnCount; c++) {
-        const name = namesRow.cells[c] ? cellDisplay(namesRow.cells[c]).trim() : '';
+        const name = namesRow.cells[c] ? clipHeader(cellDisplay(namesRow.cells[c]).trim()) : '';
         const unit = texts[c] ?? '';
         const joined = name && unit ? `${name} [${unit}]` : name || unit;
         headers[c] = joined === '' ? null : joined;
@@ -196,7 +196,7 @@ export function locateTable(grid: Grid, options: LocateOptions): LocatedTable {
     const comment = [...grid.rows].reverse().find((r) => r.rowNumber < first.rowNumber && r.comment !== undefined && filledOrComment(r));
     const between = comment ? grid.rows.filter((r) => r.rowNumber > comment.rowNumber && r.rowNumber < first.rowNumber && filled(r)) : [];
     if (comment && between.length === 0) {
-      const fields = options.splitComment(comment.comment as string).map((f) => f.trim());
+      const fields = options.splitComment(comment.comment as string).map((f) => clipHeader(f.trim()));
       if (fields.length === columnCount && fields.every((f) => f !== '' && !/^[+-]?\d/.test(f))) {
         fields.forEach((f, c) => (headers[c] = f));
         headerRow = comment.rowNumber;
@@ -207,6 +207,13 @@ export function locateTable(grid: Grid, options: LocateOptions): LocatedTable {
   for (let c = 0; c < columnCount; c++) if (headers[c] === undefined) headers[c] = null;
   if (columnCount > MAX_COLUMNS) columnCount = MAX_COLUMNS;
   return { headerRow, headers: headers.slice(0, columnCount), rows, columnCount, warnings };
+}
+
+/** headers longer than this are cut (header patterns then stay linear in practice) */
+export const MAX_HEADER_LENGTH = 120;
+
+function clipHeader(text: string): string {
+  return text.length > MAX_HEADER_LENGTH ? text.slice(0, MAX_HEADER_LENGTH - 1) + '…' : text;
 }
 
 function filledOrComment(row: GridRow): boolean {

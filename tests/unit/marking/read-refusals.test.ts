@@ -120,6 +120,20 @@ describe('containers', () => {
     expect(detectFileType(buildCompoundFile(['WordDocument']))).toMatchObject({ kind: 'unknown' });
   });
 
+  it('a Uint8Array view at an offset into a larger buffer reads like the plain bytes', async () => {
+    for (const name of ['template-filled.xlsx', 'encrypted.xlsx', 'h2-bohr-hartree.csv']) {
+      const plain = fixture(name);
+      const larger = new Uint8Array(plain.length + 40);
+      larger.fill(0x50); // "P": a stray zip signature byte around the view
+      larger.set(plain, 17);
+      const view = larger.subarray(17, 17 + plain.length);
+      const [a, b] = [await readReport(plain), await readReport(view)];
+      expect(b.ok, name).toBe(a.ok);
+      if (a.ok && b.ok) expect(b.points).toEqual(a.points);
+      if (!a.ok && !b.ok) expect(b.error.code).toBe(a.error.code);
+    }
+  });
+
   it('a CSV named .xlsx is read as CSV, with a warning', async () => {
     const result = await readReport(utf8Bytes(csv), { fileName: 'report.xlsx' });
     expect(result.ok).toBe(true);
@@ -217,6 +231,18 @@ describe('limits', () => {
     expect(error.code).toBe('too_large');
     expect(error.message).toContain('beyond its declared size');
     expect(performance.now() - started).toBeLessThan(2000); // hang guard, not a benchmark
+  });
+
+  it('pathological headers and fields stay fast (no quadratic pattern matching)', async () => {
+    const body = Array.from({ length: 10 }, (_, i) => `${1 + i},${-1 - i / 100}`).join('\n');
+    const headers = ['E' + ' _'.repeat(20000) + 'x' + ' '.repeat(20000) + '!', 'E (' + '('.repeat(50000), 'E / ' + '/'.repeat(50000)];
+    for (const header of headers) {
+      const started = performance.now();
+      const result = await readReport(utf8Bytes(`R,${header}\n${body}`));
+      expect(result.ok).toBe(true);
+      expect(performance.now() - started).toBeLessThan(2000); // hang guard, not a benchmark
+      if (result.ok) expect(result.table.columns[1].header!.length).toBeLessThanOrEqual(120);
+    }
   });
 
   it('the template built for a 200-point grid is well within the limits and reads completely', async () => {
