@@ -60,19 +60,23 @@ export function chooseColumns(
   const columns: ColumnInfo[] = [];
   const usedKeys = new Map<string, number>();
 
+  // one pass over the filled cells only (rows are sparse arrays)
+  const numericCounts = new Array<number>(table.columnCount).fill(0);
+  const textCounts = new Array<number>(table.columnCount).fill(0);
+  for (const row of table.rows) {
+    row.cells.forEach((cell, c) => {
+      if (cell === undefined || c >= table.columnCount) return;
+      if (isNumberLike(cell)) numericCounts[c]++;
+      else textCounts[c]++;
+    });
+  }
   for (let c = 0; c < table.columnCount; c++) {
     const header = table.headers[c];
     const reading = header ? readHeader(header) : null;
     readings.push(reading);
-    let numericCount = 0;
-    let textCount = 0;
-    let emptyCount = 0;
-    for (const row of table.rows) {
-      const cell = row.cells[c];
-      if (cell === undefined) emptyCount++;
-      else if (isNumberLike(cell)) numericCount++;
-      else textCount++;
-    }
+    const numericCount = numericCounts[c];
+    const textCount = textCounts[c];
+    const emptyCount = table.rows.length - numericCount - textCount;
     const letter = columnLetter(c);
     // a column of numbers: more numbers than words, or any numbers under a distance/energy header
     const named = reading?.role === 'distance' || reading?.role === 'energy';
