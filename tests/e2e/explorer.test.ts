@@ -57,7 +57,10 @@ describe('the Reference explorer', () => {
     expect(await analysis.getByRole('columnheader').nth(1).textContent()).toBe('Re / a₀');
     // the exact curve's minimum sits at 1.9972 a0 (science.md §2: 1.997, Bates, Ledsham & Stewart 1953)
     expect(await page.getByTestId('analysis-re-exact-bonding').textContent()).toBe('1.9972');
-    if (shots) await page.screenshot({ path: `${shots}/explorer-one-electron.png`, fullPage: true });
+    if (shots) {
+      await page.screenshot({ path: `${shots}/explorer-one-electron.png`, fullPage: true });
+      await page.getByTestId('explorer-curves').screenshot({ path: `${shots}/explorer-curves.png` });
+    }
 
     // switch to ångström: the same minimum, converted (2.492830 a0 × 0.529177 Å/a0 = 1.3191 Å, CODATA 2018 bohr)
     await page.getByLabel('Distance unit').selectOption('angstrom');
@@ -105,7 +108,10 @@ describe('the Reference explorer', () => {
     expect(await page.getByTestId('answer-bond-order').locator('.num').textContent()).toBe('2');
     // two electrons in the two 1πg* bars, one each (Hund's rule)
     expect(await diagram.locator('[data-mo-level="1πg*"] [data-electrons="1"]').count()).toBe(2);
-    if (shots) await page.screenshot({ path: `${shots}/explorer-o2.png`, fullPage: true });
+    if (shots) {
+      await page.screenshot({ path: `${shots}/explorer-o2.png`, fullPage: true });
+      await page.getByTestId('mo-diagram-frame').screenshot({ path: `${shots}/explorer-o2-diagram.png` });
+    }
 
     // the diagram downloads as SVG (with its term symbol) and as PNG (twice the SVG's pixel size)
     const [svgDownload] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download MO diagram of O₂ as SVG' }).click()]);

@@ -172,3 +172,42 @@ describe('data downloads', () => {
     expect(rows.find((r) => r.startsWith('1πg*'))).toContain('HOMO and LUMO');
   });
 });
+
+describe('answer key rows', () => {
+  it('lists each variant with its answers in the chosen units', async () => {
+    const { answerCells, answerColumns, answerKeyCsv, variantLabel } = await import('@client/features/explorer/lib/answer-key');
+    const { computeReference } = await import('@shared/exercises/reference');
+    const { allVariants } = await import('@shared/exercises/variants');
+    const model = {
+      family: 'one-electron' as const,
+      method: 'lcao' as const,
+      za: { kind: 'fixed' as const, value: 1 },
+      zb: { kind: 'fixed' as const, value: 1 },
+      zeta: { kind: 'list' as const, values: [1, 1.2] },
+      states: ['bonding' as const, 'antibonding' as const],
+      grid: { unit: 'bohr' as const, start: 1, end: 4, step: 0.5 },
+    };
+    const units = { distance: 'angstrom' as const, energy: 'ev' as const };
+    const variants = allVariants(model);
+    expect(variants.map(variantLabel)).toEqual(['Za = 1, Zb = 1, ζ = 1', 'Za = 1, Zb = 1, ζ = 1.2']);
+    expect(answerColumns('one-electron', units).map((c) => c.header)).toEqual(['Rₑ / Å', 'E(Rₑ) / eV', 'Dₑ / eV', 'ωₑ / cm⁻¹', 'Antibonding repulsive']);
+    const cells = answerCells(computeReference(model, variants[0]), units);
+    // ζ = 1: Re = 2.493 a0 = 1.3191 Å, De = 1.764 eV (science.md §1, computed)
+    expect(cells[0].text).toBe('1.3191');
+    expect(Number(cells[2].raw)).toBeCloseTo(1.764, 3);
+    expect(cells[4].text).toBe('yes');
+    const csv = answerKeyCsv('one-electron', units, [{ variant: variants[0], cells, error: null }, { variant: variants[1], cells: null, error: '=oops' }]).trimEnd().split('\r\n');
+    expect(csv[0]).toBe('variant,Re / angstrom,E(Re) / eV,De / eV,omega_e / cm-1,antibonding repulsive,problem');
+    // an error text that starts like a formula is guarded
+    expect(csv[2]).toBe("\"Za = 1, Zb = 1, ζ = 1.2\",,,,,,'=oops");
+  });
+
+  it('gives the MO answers of O2+', async () => {
+    const { answerCells } = await import('@client/features/explorer/lib/answer-key');
+    const { computeReference } = await import('@shared/exercises/reference');
+    const ref = computeReference({ family: 'diatomic', species: ['O2+'], order: 'auto' }, { family: 'diatomic', key: 'species=O2+', species: 'O2+' });
+    const cells = answerCells(ref, { distance: 'angstrom', energy: 'hartree' });
+    // O2+: ²Πg, bond order 2.5 (science.md §4, Huber & Herzberg 1979, from memory)
+    expect(cells.map((c) => c.text).slice(1)).toEqual(['2.5', '1', '²Πg', 'paramagnetic']);
+  });
+});

@@ -7,3 +7,4 @@ export { HuckelView, HuckelLevelsSvg } from './components/huckel-levels';
 export { PlotFrame } from './components/plot-frame';
 export { CurveAnalysisTable, type CurveAnalysisRow } from './components/curve-analysis-table';
 export type { PlotUnits } from './lib/units';
+export { VariantAnswerKey, type VariantAnswerKeyProps } from './components/variant-answer-key';

@@ -9,6 +9,8 @@ export interface PanelSeries {
   label: string;
   color: string;
   dashed?: boolean;
+  /** drawing order: lower layers first (references under the curves compared with them) */
+  layer?: number;
   x: readonly number[];
   y: readonly number[];
 }
@@ -55,10 +57,13 @@ const axisTitle = { fill: PLOT_TOKENS.ink, fontSize: 12, fontFamily: PLOT_FONT_F
 export function ChartPanel({ series, xLabel, yLabel, xDomain, yDomain, markers = [], rules = [], height = 300, ariaLabel, testId }: ChartPanelProps) {
   const data = useMemo(
     () =>
-      series.map((s) => ({
-        ...s,
-        points: s.x.flatMap((x, i) => (Number.isFinite(x) && Number.isFinite(s.y[i]) ? [{ x, y: s.y[i] }] : [])),
-      })),
+      series
+        .map((s, order) => ({
+          ...s,
+          order,
+          points: s.x.flatMap((x, i) => (Number.isFinite(x) && Number.isFinite(s.y[i]) ? [{ x, y: s.y[i] }] : [])),
+        }))
+        .sort((a, b) => (a.layer ?? 1) - (b.layer ?? 1) || a.order - b.order),
     [series],
   );
   const xTicks = useMemo(() => niceTicks(xDomain[0], xDomain[1], 8), [xDomain]);

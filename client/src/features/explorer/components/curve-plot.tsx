@@ -114,6 +114,7 @@ export function CurvePlot({
         label: s.label,
         color: colors[i],
         dashed: s.dashed,
+        layer: s.kind === 'reference' ? 0 : 1,
         x: s.distanceBohr.map((r) => distanceFromBohr(r, units.distance)),
         y: s.energyHartree.map((e) => energyFromHartree(e, units.energy)),
       })),
