@@ -360,6 +360,8 @@ export const answerKeyResponseSchema = z.object({
   ),
   /** true when the rules allow more variants than listed (cap 500) */
   truncated: z.boolean(),
+  /** false when some answer keys were left for a later request (3 s budget per request; held variants first) */
+  complete: z.boolean(),
 });
 export type AnswerKeyResponse = z.infer<typeof answerKeyResponseSchema>;
 

@@ -5,6 +5,7 @@ import { drawVariant, type Variant } from '@shared/exercises/variants';
 import type { ExerciseSpecInput } from '@shared/exercises/spec';
 import type { AnswerKeyResponse, ExerciseMutationResponse, ExercisesResponse, PreviewResponse, StaffExercise, StudentExercise } from '@shared/api/exercises';
 import { ensureVariant } from '@server/modules/exercises/variants';
+import { answerKeyLimits } from '@server/modules/exercises/service';
 
 let ctx: AppContext;
 let k: AppContext['db']['knex'];
@@ -410,6 +411,7 @@ describe('the life of an exercise', () => {
     const lec = await call<AnswerKeyResponse>('lec1', 'GET', `/exercises/${exId}/answer-key`);
     expect(lec.status).toBe(200);
     expect(lec.body.revisionNo).toBe(3);
+    expect(lec.body.complete).toBe(true);
     expect(lec.body.variants.map((v) => v.key)).toEqual(['za=1;zb=1;zeta=1', 'za=1;zb=1;zeta=1.1', 'za=1;zb=1;zeta=1.2', 'za=1;zb=1;zeta=1.3']);
     const zeta1 = lec.body.variants[0].answers!;
     expect(zeta1.kind).toBe('curve');
@@ -495,6 +497,29 @@ describe('answer keys of the other families', () => {
     expect(bySpecies.get('species=B2')).toMatchObject({ termSymbol: '³Σg⁻' });
     expect(bySpecies.get('species=C2')).toMatchObject({ termSymbol: '¹Σg⁺' });
     expect(key.body.variants.every((v) => v.students.length === 0)).toBe(true);
+  });
+
+  it('a request past its time budget returns what it computed, variants held by students first; asking again completes the key', async () => {
+    const r = await createAs('lec1', ids.c1, oneElectronSpec({ title: 'Budget', variantSeed: 'budget-seed', model: { ...(oneElectronSpec().model as object), zeta: { kind: 'list', values: [1.01, 1.02, 1.03, 1.04, 1.05, 1.06] } } as ExerciseSpecInput['model'] }));
+    const id = r.body.exercise.id;
+    await call('lec1', 'POST', `/exercises/${id}/publish`);
+    const held = new Set((await k('variants').where({ revision_id: r.body.exercise.revision.id }).distinct('variant_key')).map((x) => x.variant_key as string));
+    const saved = answerKeyLimits.budgetMs;
+    answerKeyLimits.budgetMs = 0;
+    try {
+      const first = await call<AnswerKeyResponse>('lec1', 'GET', `/exercises/${id}/answer-key`);
+      expect(first.body.complete).toBe(false);
+      const done = first.body.variants.filter((v) => v.answers);
+      expect(done).toHaveLength(1);
+      expect(held.has(done[0].key)).toBe(true);
+      expect(first.body.variants.find((v) => !v.answers)!.error).toMatch(/not computed yet/);
+      let last = first.body;
+      for (let i = 0; i < 6 && !last.complete; i++) last = (await call<AnswerKeyResponse>('lec1', 'GET', `/exercises/${id}/answer-key`)).body;
+      expect(last.complete).toBe(true);
+      expect(last.variants.every((v) => v.answers?.kind === 'curve')).toBe(true);
+    } finally {
+      answerKeyLimits.budgetMs = saved;
+    }
   });
 
   it('Hückel: x values per system', async () => {

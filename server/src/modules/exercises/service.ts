@@ -309,12 +309,33 @@ export async function closeExercise(db: Knex, user: Caller, id: number): Promise
 
 /* ---------- answer key and preview ---------- */
 
+/**
+ * Answer keys are pure functions of (model, variant, engine version), so a
+ * small per-process memo saves recomputing them on every page view. It is a
+ * cache only: any server recomputes what it lacks.
+ */
+const answerMemo = new Map<string, { answers: AnswerKey | null; error: string | null }>();
+const ANSWER_MEMO_MAX = 5000;
+
+const memoKeyOf = (spec: ExerciseSpec, variant: Variant) => `${ENGINE_VERSION}|${JSON.stringify(spec.model)}|${JSON.stringify(variant)}`;
+
+function memoizedAnswers(spec: ExerciseSpec, variant: Variant) {
+  return answerMemo.get(memoKeyOf(spec, variant));
+}
+
 function computeAnswers(spec: ExerciseSpec, variant: Variant): { answers: AnswerKey | null; error: string | null } {
+  const memoKey = memoKeyOf(spec, variant);
+  const hit = answerMemo.get(memoKey);
+  if (hit) return hit;
+  let out: { answers: AnswerKey | null; error: string | null };
   try {
-    return { answers: answerKeyOf(computeReference(spec.model, variant)), error: null };
+    out = { answers: answerKeyOf(computeReference(spec.model, variant)), error: null };
   } catch (e) {
-    return { answers: null, error: (e as Error).message };
+    out = { answers: null, error: (e as Error).message };
   }
+  if (answerMemo.size >= ANSWER_MEMO_MAX) answerMemo.delete(answerMemo.keys().next().value!);
+  answerMemo.set(memoKey, out);
+  return out;
 }
 
 const studentOf = (e: EnrolmentRow): VariantStudent => ({ enrolmentId: e.id, studentNumber: e.student_number, name: e.name, section: e.section });
@@ -326,6 +347,8 @@ async function visibleTo(db: Db, user: Caller, access: ExerciseAccess, courseId:
 }
 
 const VARIANT_CAP = 500;
+/** time one answer-key request may spend computing (tests lower it) */
+export const answerKeyLimits = { budgetMs: 3000 };
 
 export async function answerKey(db: Knex, user: Caller, exercise: ExerciseRow, access: ExerciseAccess, revisionNo?: number): Promise<AnswerKeyResponse> {
   const revisions = await revisionsOf(db, exercise.id);
@@ -346,18 +369,37 @@ export async function answerKey(db: Knex, user: Caller, exercise: ExerciseRow, a
     const e = enrolments.get(s.enrolment_id);
     if (e && visible(e)) entry.students.push(studentOf(e));
   }
+  // Variants held by students first; past the time budget the rest are left for the next request
+  // (the memo keeps what was done), so one request never blocks the server for long.
+  const entries = [...byKey.entries()];
+  const order = entries.map((_, i) => i).sort((a, b) => Number(entries[b][1].students.length > 0) - Number(entries[a][1].students.length > 0) || a - b);
+  const started = performance.now();
+  const answers = new Map<number, { answers: AnswerKey | null; error: string | null }>();
+  let fresh = 0;
+  for (const i of order) {
+    const memo = memoizedAnswers(spec, entries[i][1].variant);
+    if (memo) {
+      answers.set(i, memo);
+      continue;
+    }
+    // every request computes at least one new key, so reloading always gets further
+    if (fresh > 0 && performance.now() - started > answerKeyLimits.budgetMs) continue;
+    answers.set(i, computeAnswers(spec, entries[i][1].variant));
+    fresh += 1;
+  }
   return {
     exerciseId: exercise.id,
     revisionId: revision.id,
     revisionNo: revision.revision_no,
     engineVersion: revision.engine_version,
-    variants: [...byKey.entries()].map(([key, { variant, students }]) => ({
+    variants: entries.map(([key, { variant, students }], i) => ({
       key,
       variant,
-      ...computeAnswers(spec, variant),
+      ...(answers.get(i) ?? { answers: null, error: 'not computed yet (time budget of one request); load the answer key again to continue' }),
       students: students.sort((a, b) => a.studentNumber.localeCompare(b.studentNumber)),
     })),
     truncated: possible.length > VARIANT_CAP,
+    complete: answers.size === entries.length,
   };
 }
 

@@ -162,6 +162,14 @@ export function VariantPreviewPanel({
               ? `The first ${CLIENT_KEY_CAP} of ${variants.length > 500 ? 'more than 500' : variants.length} variants, computed in the browser from the rules as edited; save to see them all.`
               : 'Computed in the browser from the rules as edited.'}
         </p>
+        {server && answerKey.data && !answerKey.data.complete ? (
+          <p className="flex flex-wrap items-center gap-2 text-sm text-caution" data-testid="answer-key-incomplete">
+            Some answer keys take long to compute and are not done yet.
+            <Button size="sm" onClick={() => void answerKey.refetch()} disabled={answerKey.isFetching}>
+              {answerKey.isFetching ? 'Computing…' : 'Compute the rest'}
+            </Button>
+          </p>
+        ) : null}
         {server && answerKey.isError ? (
           <ErrorNotice what="the answer key" error={answerKey.error} onRetry={() => void answerKey.refetch()} />
         ) : server && answerKey.isPending ? (
