@@ -6,7 +6,8 @@
  *  2. migrations, and the demo scenario when the database is empty;
  *  3. the local identity provider (unless OIDC_ISSUER is set) and SMTP catcher (unless SMTP_URL is set);
  *  4. the client build (production mode) or Vite's dev middleware (--dev);
- *  5. the app, at the printed address.
+ *  5. the app, at the printed address;
+ *  6. the job worker (re-marking, similarity), stopped before the database on shutdown.
  */
 import path from 'node:path';
 import { readEnv, buildConfig } from '../server/src/platform/config';
@@ -113,6 +114,13 @@ async function main() {
       server.once('error', reject);
     });
     cleanups.push(() => new Promise<void>((resolve) => server.close(() => resolve())));
+
+    // 6. background jobs (re-marking, similarity) in this process; more servers may run workers too
+    const { createJobWorker } = await import('../server/src/platform/jobs');
+    const { reportJobHandlers } = await import('../server/src/modules/reports/jobs');
+    const worker = createJobWorker({ db: knex, handlers: reportJobHandlers(), log: logger });
+    worker.start();
+    cleanups.push(() => worker.stop());
 
     console.log('');
     console.log(`Bondmark is running at ${publicUrl}  (${dev ? 'development, hot reload' : env.NODE_ENV})`);

@@ -193,6 +193,28 @@ export async function fillTemplate(template: Uint8Array | Buffer, reference: Cur
   return Buffer.from(await workbook.xlsx.writeBuffer());
 }
 
+/** Types answers into a downloaded personal template's answer cells (named by its hidden sheet: answer:<kind> → cell). */
+export async function fillAnswers(template: Uint8Array | Buffer, answers: Record<string, string | number>): Promise<Buffer> {
+  const workbook = new ExcelJS.Workbook();
+  await workbook.xlsx.load(template as unknown as ArrayBuffer);
+  const meta = workbook.getWorksheet('bondmark-meta');
+  if (!meta) throw new Error('no bondmark-meta sheet in the template');
+  const cells = new Map<string, string>();
+  let dataSheet = 'Data';
+  meta.eachRow((row) => {
+    const key = String(row.getCell(1).value);
+    if (key.startsWith('answer:')) cells.set(key.slice(7), String(row.getCell(2).value));
+    if (key === 'dataSheet') dataSheet = String(row.getCell(2).value);
+  });
+  for (const [name, value] of Object.entries(answers)) {
+    const ref = cells.get(name);
+    if (!ref) throw new Error(`the template has no answer cell for ${name} (it has ${[...cells.keys()].join(', ')})`);
+    const [sheetName, address] = ref.includes('!') ? ref.split('!') : [dataSheet, ref];
+    workbook.getWorksheet(sheetName.replace(/^'|'$/g, ''))!.getCell(address).value = value;
+  }
+  return Buffer.from(await workbook.xlsx.writeBuffer());
+}
+
 export interface FormFile {
   name: string;
   bytes: Uint8Array | Buffer | string;

@@ -15,6 +15,7 @@ import {
   createPublishedExercise,
   curveReferenceOf,
   curveSpec,
+  fillAnswers,
   fillTemplate,
   minimalPdf,
   referenceCsv,
@@ -309,6 +310,40 @@ describe('personal templates', () => {
     const wrong = await post<ErrorBody>('lec1', `/exercises/${exerciseId}/reports?enrolmentId=${seed.enrolments.stu1}`, uploadForm({ name: 'borrowed.xlsx', bytes: stu2Template }, { choice: bohrHartreeChoice }));
     expect(wrong.status).toBe(422);
     expect(await uploadRowCounts(ctx.db.knex)).toEqual(before);
+  });
+});
+
+describe('answers-only exercises', () => {
+  it('an MO-diagram exercise is handed in as a template with answers, and marked', async () => {
+    const diatomic = curveSpec({
+      title: 'MO diagram of a diatomic',
+      model: { family: 'diatomic', species: ['O2'], order: 'auto' },
+      scheme: {
+        checks: [
+          { kind: 'bond-order', id: 'bond-order', label: 'Bond order', weight: 1 },
+          { kind: 'unpaired-electrons', id: 'unpaired', label: 'Unpaired electrons', weight: 1 },
+          { kind: 'term-symbol', id: 'term', label: 'Ground term', weight: 2 },
+        ],
+      },
+    });
+    const { exerciseId: moExercise } = await createPublishedExercise(ctx.db.knex, seed.courseId, seed.users.lec1, diatomic);
+    const { client } = await as('stu1');
+    const res = await fetch(`${ctx.baseUrl}/api/v1/exercises/${moExercise}/template`, { headers: { cookie: [...client.cookies].map(([k, v]) => `${k}=${v}`).join('; ') } });
+    expect(res.status).toBe(200);
+    // O2: bond order 2, two unpaired electrons, ground term ³Σg⁻ (from memory; standard textbook MO result), typed in a usual notation
+    const filled = await fillAnswers(Buffer.from(await res.arrayBuffer()), { 'bond-order': 2, 'unpaired-electrons': 2, 'term-symbol': '3Sigma_g-' });
+    const preview = await post<ReadPreview>('stu1', `/exercises/${moExercise}/reports/read`, uploadForm({ name: 'o2.xlsx', bytes: filled }));
+    expect(preview.status).toBe(200);
+    expect(preview.body.table).toBeNull();
+    expect(preview.body.answers).toMatchObject({ 'bond-order': 2, 'unpaired-electrons': 2, 'term-symbol': '3Sigma_g-' });
+    const r = await post<UploadResult>('lec1', `/exercises/${moExercise}/reports?enrolmentId=${seed.enrolments.stu1}`, uploadForm({ name: 'o2.xlsx', bytes: filled }, { choice: bohrHartreeChoice }));
+    expect(r.status).toBe(201);
+    expect(r.body.report.units).toBeNull();
+    expect(r.body.report.mark!.checks.map((c) => [c.id, c.points])).toEqual([
+      ['bond-order', 1],
+      ['unpaired', 1],
+      ['term', 2],
+    ]);
   });
 });
 

@@ -54,7 +54,8 @@ export function reportRoutes(db: Knex, limits: UploadLimits = uploadLimitsFromEn
 
   r.post('/exercises/:exerciseId/reports', requireUser, validate({ params: exerciseParamsSchema, query: onBehalfQuerySchema }), loadTarget, files, async (req, res) => {
     const { target } = res.locals as Locals;
-    const { read, warnings } = await readFrom(req, target, true);
+    // the confirmed column/unit choice is required where there is a curve to read
+    const { read, warnings } = await readFrom(req, target, target.spec.model.family === 'one-electron' || target.spec.model.family === 'two-electron');
     res.status(201).json(await storeUpload(db, req.user!, target, read, warnings));
   });
 

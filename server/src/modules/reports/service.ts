@@ -26,6 +26,7 @@ import { distanceFromBohr, energyFromHartree, type DistanceUnit, type EnergyUnit
 import { readReport, readReportWithChoice, type ColumnInfo, type ReadResult, type ReadSuccess, type TemplateInfo, type UnitSource } from '@shared/marking/read';
 import { detectFileType } from '@shared/marking/read/detect-file-type';
 import type { MarkableReading, ReportAnswers } from '@shared/marking/score';
+import { answersFromTemplateInfo, readAnswerFile } from '@shared/marking/answers';
 import { recordAudit } from '../../platform/audit';
 import { HttpError, conflict, forbidden, notFound } from '../../platform/errors';
 import { enqueueOnce } from '../../platform/jobs';
@@ -123,9 +124,7 @@ function refusal(result: Extract<ReadResult, { ok: false }>, field: 'data' | 'ch
 }
 
 function answersOf(template: TemplateInfo | undefined): ReportAnswers | null {
-  if (!template) return null;
-  const out: ReportAnswers = {};
-  for (const [name, a] of Object.entries(template.answers)) out[name] = a.value;
+  const out = answersFromTemplateInfo(template);
   return Object.keys(out).length ? out : null;
 }
 
@@ -156,10 +155,15 @@ export async function readUpload(spec: ExerciseSpec, data: ReceivedFile, writeup
   if (result.ok) {
     return { data, writeup, detected, reading: result, answers: answersOf(result.template), template: result.template ?? null };
   }
-  // An answers-only exercise (MO diagram, Hückel) can be handed in as a template with answers and no curve.
-  const answers = answersOf(result.template);
-  if (!curveFamilies.has(spec.model.family) && answers && ['no_numeric_data', 'too_few_points', 'too_few_columns'].includes(result.error.code)) {
-    return { data, writeup, detected, reading: null, answers, template: result.template ?? null };
+  // An answers-only exercise (MO diagram, Hückel) is handed in as a template with answer cells, or a
+  // two-column question,answer file: no curve to read.
+  if (!curveFamilies.has(spec.model.family) && ['no_numeric_data', 'too_few_points', 'too_few_columns', 'not_a_number', 'bad_choice'].includes(result.error.code)) {
+    let answers = answersOf(result.template);
+    if (!answers) {
+      const file = await readAnswerFile(bytes);
+      if (Object.keys(file.answers).length) answers = file.answers;
+    }
+    if (answers) return { data, writeup, detected, reading: null, answers, template: result.template ?? null };
   }
   throw refusal(result, choice && result.error.code === 'bad_choice' ? 'choice' : 'data');
 }

@@ -24,7 +24,7 @@ export function readReportFiles(exerciseId: number, files: UploadFiles, onProgre
 }
 
 /** POST /api/v1/exercises/:id/reports: stores a new version with the confirmed choice. */
-export function uploadReportFiles(exerciseId: number, files: UploadFiles & { choice: ReportChoice }, onProgress?: (p: UploadProgress) => void, enrolmentId?: number) {
+export function uploadReportFiles(exerciseId: number, files: UploadFiles, onProgress?: (p: UploadProgress) => void, enrolmentId?: number) {
   return sendWithProgress<UploadResult>(withQuery(`/api/v1/exercises/${exerciseId}/reports`, { enrolmentId }), formOf(files), { onProgress });
 }
 
@@ -37,7 +37,7 @@ export function useReadReport(exerciseId: number, enrolmentId?: number) {
 export function useUploadReport(exerciseId: number, enrolmentId?: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (args: { files: UploadFiles & { choice: ReportChoice }; onProgress?: (p: UploadProgress) => void }) => uploadReportFiles(exerciseId, args.files, args.onProgress, enrolmentId),
+    mutationFn: (args: { files: UploadFiles; onProgress?: (p: UploadProgress) => void }) => uploadReportFiles(exerciseId, args.files, args.onProgress, enrolmentId),
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: reportsKeys.exercise(exerciseId) });
       void queryClient.invalidateQueries({ queryKey: ['my-exercises'] });

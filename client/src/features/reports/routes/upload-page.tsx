@@ -105,13 +105,14 @@ export function UploadReportPage() {
   };
 
   const confirm = async () => {
-    if (!dataFile || !choice) return;
+    const answersOnly = preview !== null && preview.table === null && Boolean(preview.answers);
+    if (!dataFile || (!choice && !answersOnly)) return;
     const mine = ++request.current;
     setError(null);
     setPhase({ kind: 'uploading', progress: null });
     try {
       const result = await uploader.mutateAsync({
-        files: { data: dataFile, writeup, choice },
+        files: { data: dataFile, writeup, choice: choice ?? undefined },
         onProgress: (p) => mine === request.current && setPhase({ kind: 'uploading', progress: p }),
       });
       setDone(result);
@@ -132,6 +133,7 @@ export function UploadReportPage() {
   const writeUpWord = exercise?.writeUp === 'required' ? 'required' : 'optional';
   const staffView = enrolmentId !== undefined;
   const noCurve = preview !== null && preview.table === null && !preview.answers;
+  const answersOnly = preview !== null && preview.table === null && Boolean(preview.answers);
 
   return (
     <>
@@ -231,7 +233,7 @@ export function UploadReportPage() {
                   <ReadBack preview={preview} choice={choice} onChange={onChoice} busy={busy} />
                   {noCurve ? null : (
                     <div className="flex flex-wrap items-center gap-3">
-                      <Button variant="primary" onClick={() => void confirm()} disabled={busy || !choice || (exercise.writeUp === 'required' && !writeup)}>
+                      <Button variant="primary" onClick={() => void confirm()} disabled={busy || (!choice && !answersOnly) || (exercise.writeUp === 'required' && !writeup)}>
                         Confirm and upload
                       </Button>
                       <Button variant="quiet" onClick={() => onDataFile(null)} disabled={busy}>
