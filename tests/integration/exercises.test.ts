@@ -157,10 +157,11 @@ describe('creating an exercise', () => {
     expect(await count('variants')).toBe(0);
   });
 
-  it('an admin may create one in any course', async () => {
+  it('an admin may create one in any course (404 for a course that does not exist)', async () => {
     const r = await createAs('adm', ids.c2, diatomicSpec({ title: 'Admin-made draft' }));
     expect(r.status).toBe(201);
     expect(r.body.exercise.course.id).toBe(ids.c2);
+    expect((await createAs('adm', 987654, diatomicSpec())).status).toBe(404);
   });
 
   it('answers invalid specs with 400 and the path of every bad field, storing nothing', async () => {

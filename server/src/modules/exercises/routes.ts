@@ -15,6 +15,8 @@ import { checkedExerciseSpecSchema, previewQuerySchema, updateExerciseBodySchema
 import type { ExerciseSpec } from '@shared/exercises/spec';
 import { assertCourseRole, requireUser } from '../../platform/access';
 import { validate } from '../../platform/validate';
+import { notFound } from '../../platform/errors';
+import { courseOf } from './repo';
 import { answerKeyQuerySchema, courseParamsSchema, exerciseParamsSchema } from './schema';
 import {
   accessFrom,
@@ -46,6 +48,7 @@ export function courseExerciseRoutes(db: Knex): Router {
     // role before body: a caller without the role learns nothing from validation
     const roles = await assertCourseRole(db, req, courseId, ['lecturer']);
     requireAuthor(accessFrom(req.user!, roles));
+    if (!(await courseOf(db, courseId))) throw notFound(`No course ${courseId}.`);
     validate({ body: checkedExerciseSpecSchema })(req, res, async (err?: unknown) => {
       if (err) return next(err);
       try {
