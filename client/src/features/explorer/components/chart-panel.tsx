@@ -72,7 +72,7 @@ export function ChartPanel({ series, xLabel, yLabel, xDomain, yDomain, markers =
   return (
     <div data-plot-panel role="img" aria-label={ariaLabel} data-testid={testId} style={{ height }}>
       <ResponsiveContainer width="100%" height={height}>
-        <LineChart margin={{ top: 10, right: 18, bottom: 26, left: 14 }}>
+        <LineChart margin={{ top: 10, right: 18, bottom: 26, left: 14 }} accessibilityLayer={false}>
           <CartesianGrid stroke={PLOT_TOKENS.rule} strokeDasharray="2 3" />
           <XAxis
             type="number"

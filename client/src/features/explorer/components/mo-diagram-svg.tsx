@@ -8,24 +8,25 @@ import { ElectronArrows } from './electron-arrows';
 const LAMBDA_GREEK: Record<TermSymbol['lambda'], string> = { Sigma: 'Σ', Pi: 'Π', Delta: 'Δ', Phi: 'Φ', Gamma: 'Γ' };
 const SUPERSCRIPT = ['⁰', '¹', '²', '³', '⁴', '⁵', '⁶', '⁷', '⁸', '⁹'];
 
-/** The term symbol with g/u lowered; its text content reads e.g. "³Σg⁻". */
-export function TermSymbolText({ term, x, y, fontSize = 16 }: { term: TermSymbol; x: number; y: number; fontSize?: number }) {
+/** The term symbol as tspans inside a <text>, g/u lowered; its text content reads e.g. "³Σg⁻". */
+export function TermSymbolTspans({ term, fontSize = 16 }: { term: TermSymbol; fontSize?: number }) {
   const multiplicity = String(term.multiplicity)
     .split('')
     .map((d) => SUPERSCRIPT[Number(d)])
     .join('');
   const reflection = term.reflection === '+' ? '⁺' : term.reflection === '-' ? '⁻' : '';
+  const drop = fontSize * 0.28;
   return (
-    <text x={x} y={y} fontSize={fontSize} fill={PLOT_TOKENS.ink} fontFamily={PLOT_FONT_FAMILY} data-testid="term-symbol">
+    <tspan fontSize={fontSize} fill={PLOT_TOKENS.ink} data-testid="term-symbol">
       {multiplicity}
       {LAMBDA_GREEK[term.lambda]}
       {term.parity ? (
-        <tspan dy={fontSize * 0.28} fontSize={fontSize * 0.72}>
+        <tspan dy={drop} fontSize={fontSize * 0.72}>
           {term.parity}
         </tspan>
       ) : null}
-      {reflection ? <tspan dy={term.parity ? -fontSize * 0.28 : 0}>{reflection}</tspan> : null}
-    </text>
+      {reflection ? <tspan dy={term.parity ? -drop : 0}>{reflection}</tspan> : null}
+    </tspan>
   );
 }
 
@@ -203,16 +204,18 @@ export function MoDiagramSvg({ diagram, title, testId = 'mo-diagram' }: MoDiagra
 
         {/* footer: term symbol, bond order, configuration, key */}
         <line x1={12} y1={footerTop - 10} x2={width - 12} y2={footerTop - 10} stroke={PLOT_TOKENS.rule} />
-        <text x={16} y={footerTop + 10} fontSize={13} fill={PLOT_TOKENS.graphite}>
-          ground term
-        </text>
-        <TermSymbolText term={diagram.termSymbol} x={92} y={footerTop + 11} />
-        <text x={160} y={footerTop + 10} fontSize={13} fill={PLOT_TOKENS.ink} data-testid="bond-order">
-          <tspan fill={PLOT_TOKENS.graphite}>bond order </tspan>
-          <tspan fontFamily={PLOT_MONO_FAMILY}>{formatBondOrder(diagram.bondOrder)}</tspan>
-          <tspan fill={PLOT_TOKENS.graphite}> · unpaired </tspan>
-          <tspan fontFamily={PLOT_MONO_FAMILY}>{diagram.unpairedElectrons}</tspan>
-          <tspan fill={PLOT_TOKENS.graphite}> · {diagram.magnetism}</tspan>
+        <text x={16} y={footerTop + 11} fontSize={13} fill={PLOT_TOKENS.graphite} data-testid="diagram-summary">
+          ground term <TermSymbolTspans term={diagram.termSymbol} />
+          {/* an absolute y puts the rest back on the baseline after a lowered g/u */}
+          <tspan y={footerTop + 11}> · bond order </tspan>
+          <tspan fontFamily={PLOT_MONO_FAMILY} fill={PLOT_TOKENS.ink} data-testid="bond-order">
+            {formatBondOrder(diagram.bondOrder)}
+          </tspan>
+          <tspan> · unpaired electrons </tspan>
+          <tspan fontFamily={PLOT_MONO_FAMILY} fill={PLOT_TOKENS.ink}>
+            {diagram.unpairedElectrons}
+          </tspan>
+          <tspan> · {diagram.magnetism}</tspan>
         </text>
         <text x={16} y={footerTop + 32} fontSize={12.5} fill={PLOT_TOKENS.ink} data-testid="configuration">
           {diagram.configuration}
