@@ -11,17 +11,19 @@ const person = (roles: Roles) => ({ roles, isAdmin: roles.includes('admin') });
 const labels = (roles: Roles) => navigationFor(person(roles)).map((item) => `${item.label} ${item.to}`);
 
 describe('navigationFor', () => {
-  it('gives a student Dashboard and My courses only', () => {
-    expect(labels(['student'])).toEqual(['Dashboard /', 'My courses /courses']);
+  it('gives a student Dashboard, My courses and My exercises only', () => {
+    expect(labels(['student'])).toEqual(['Dashboard /', 'My courses /courses', 'My exercises /my/exercises']);
   });
-  it('gives lecturers and assistants Courses, without admin pages', () => {
-    expect(labels(['lecturer'])).toEqual(['Dashboard /', 'Courses /courses']);
-    expect(labels(['assistant', 'student'])).toEqual(['Dashboard /', 'Courses /courses']);
+  it('gives lecturers and assistants Courses and the explorer, without admin pages', () => {
+    expect(labels(['lecturer'])).toEqual(['Dashboard /', 'Courses /courses', 'Reference explorer /explorer']);
+    // an assistant who is a student elsewhere also fetches templates
+    expect(labels(['assistant', 'student'])).toEqual(['Dashboard /', 'Courses /courses', 'My exercises /my/exercises', 'Reference explorer /explorer']);
   });
   it('gives admins People and Audit log', () => {
     expect(labels(['admin'])).toEqual([
       'Dashboard /',
       'Courses /courses',
+      'Reference explorer /explorer',
       'People /admin/people',
       'Audit log /admin/audit',
     ]);

@@ -308,17 +308,3 @@ describe('estimateNoise', () => {
   });
 });
 
-describe('performance', () => {
-  it('analyses a 200-point curve in well under 1 ms', () => {
-    const random = mulberry32(5);
-    const distances = Array.from({ length: 200 }, (_, i) => 0.6 + i * 0.05);
-    const curve = { distanceBohr: distances, energyHartree: distances.map((r) => morseEnergy(r, H2_LIKE) + 1e-5 * gaussian(random)) };
-    const mu = reducedMassMe(['1H', '1H']);
-    for (let i = 0; i < 200; i++) analyseCurve(curve, { reducedMassMe: mu }); // warm-up
-    const runs = 500;
-    const start = performance.now();
-    for (let i = 0; i < runs; i++) analyseCurve(curve, { reducedMassMe: mu });
-    const perRunMs = (performance.now() - start) / runs;
-    expect(perRunMs).toBeLessThan(0.5);
-  });
-});

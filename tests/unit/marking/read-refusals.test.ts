@@ -207,11 +207,9 @@ describe('limits', () => {
 
   it('zip bomb: declared sizes over the limit are refused before inflating', async () => {
     const bytes = patchDeclaredSizes(fixture('template-filled.xlsx'), 0x7fff0000);
-    const started = performance.now();
     const error = refusal(await readReport(bytes));
     expect(error.code).toBe('too_large');
     expect(error.message).toContain('would inflate to');
-    expect(performance.now() - started).toBeLessThan(2000); // hang guard, not a benchmark
   });
 
   it('zip bomb: a real 12 MB part is refused by a 10 MB limit from its declared size', async () => {
