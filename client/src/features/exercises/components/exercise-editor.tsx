@@ -26,6 +26,21 @@ import { VariantPreviewPanel } from './variant-preview';
 const stateTone = { draft: 'neutral', published: 'good', closed: 'caution' } as const;
 export const stateLabel = { draft: 'Draft', published: 'Published', closed: 'Closed' } as const;
 
+/** Jumps to the control of a path, or of its nearest parent that has one (e.g. model.species.2 → model.species). */
+function focusField(event: { preventDefault(): void }, path: string) {
+  const parts = path.split('.');
+  while (parts.length) {
+    const el = document.getElementById(fieldId(parts.join('.'))) ?? document.querySelector<HTMLElement>(`[data-field="${parts.join('.')}"] input, [data-field="${parts.join('.')}"] select`);
+    if (el) {
+      event.preventDefault();
+      el.scrollIntoView({ block: 'center' });
+      el.focus();
+      return;
+    }
+    parts.pop();
+  }
+}
+
 type Pending = { kind: 'remark'; nextRevisionNo: number; reportCount: number } | { kind: 'publish' } | { kind: 'close' } | { kind: 'reopen' } | null;
 
 export function ExerciseEditor({
@@ -204,7 +219,7 @@ export function ExerciseEditor({
           <ul className="mt-1 list-disc pl-5 text-[0.9rem]">
             {errorList.slice(0, 12).map(([path, message]) => (
               <li key={path}>
-                <a href={`#${fieldId(path)}`} className="text-reference underline">
+                <a href={`#${fieldId(path)}`} onClick={(e) => focusField(e, path)} className="text-reference underline">
                   <Num>{path}</Num>
                 </a>
                 : {message}

@@ -116,6 +116,7 @@ export function VariantPreviewPanel({
           </div>
           <Button type="submit">Show their variant</Button>
         </form>
+        {deferredModel.family === 'one-electron' || deferredModel.family === 'two-electron' ? (
         <div className="flex flex-col">
           <label htmlFor={unitId} className="mb-1 text-sm font-semibold text-ink">
             Energy unit
@@ -128,6 +129,7 @@ export function VariantPreviewPanel({
             ))}
           </select>
         </div>
+        ) : null}
       </div>
       {studentNumber ? (
         <p className="text-sm text-graphite" data-testid="student-variant-note">
