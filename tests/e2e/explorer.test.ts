@@ -111,6 +111,9 @@ describe('the Reference explorer', () => {
     if (shots) {
       await page.screenshot({ path: `${shots}/explorer-o2.png`, fullPage: true });
       await page.getByTestId('mo-diagram-frame').screenshot({ path: `${shots}/explorer-o2-diagram.png` });
+      await page.setViewportSize({ width: 820, height: 1100 });
+      await page.screenshot({ path: `${shots}/explorer-o2-tablet.png`, fullPage: true });
+      await page.setViewportSize({ width: 1280, height: 900 });
     }
 
     // the diagram downloads as SVG (with its term symbol) and as PNG (twice the SVG's pixel size)

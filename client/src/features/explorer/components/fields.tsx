@@ -52,15 +52,18 @@ export interface NumberFieldProps {
   disabled?: boolean;
   className?: string;
   testId?: string;
+  /** a further check on an in-range number; returns the message to show, or null */
+  validate?: (value: number) => string | null;
 }
 
 /** A number input that only passes on numbers inside [min, max] and says why otherwise. */
-export function NumberField({ label, value, onCommit, min, max, step = 0.1, integer = false, unit, hint, disabled, className, testId }: NumberFieldProps) {
+export function NumberField({ label, value, onCommit, min, max, step = 0.1, integer = false, unit, hint, disabled, className, testId, validate }: NumberFieldProps) {
   const id = useId();
   const [text, setText] = useCommittedText(value, (v) => String(v), (t, v) => Number(t) === v && t.trim() !== '');
   const parsed = text.trim() === '' ? NaN : Number(text);
-  const valid = Number.isFinite(parsed) && parsed >= min && parsed <= max && (!integer || Number.isInteger(parsed));
-  const error = valid || disabled ? null : `Give ${integer ? 'a whole number' : 'a number'} from ${min} to ${max}.`;
+  const inRange = Number.isFinite(parsed) && parsed >= min && parsed <= max && (!integer || Number.isInteger(parsed));
+  const extra = inRange && validate ? validate(parsed) : null;
+  const error = disabled ? null : !inRange ? `Give ${integer ? 'a whole number' : 'a number'} from ${min} to ${max}.` : extra;
   return (
     <FieldShell label={label} htmlFor={id} hint={hint} hintId={`${id}-hint`} error={error} errorId={`${id}-error`} className={className}>
       <div className="flex items-center gap-1.5">
@@ -80,7 +83,7 @@ export function NumberField({ label, value, onCommit, min, max, step = 0.1, inte
           onChange={(e) => {
             setText(e.target.value);
             const v = Number(e.target.value);
-            if (e.target.value.trim() !== '' && Number.isFinite(v) && v >= min && v <= max && (!integer || Number.isInteger(v))) onCommit(v);
+            if (e.target.value.trim() !== '' && Number.isFinite(v) && v >= min && v <= max && (!integer || Number.isInteger(v)) && !(validate && validate(v))) onCommit(v);
           }}
         />
         {unit ? <span className="shrink-0 text-[0.85rem] text-graphite">{unit}</span> : null}

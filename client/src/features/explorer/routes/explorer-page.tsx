@@ -165,8 +165,8 @@ function Controls({ state, update, graphErrors }: { state: ExplorerState; update
             onCommit={(zeta) => update({ zeta })}
           />
           <CheckboxField className="self-end pb-2" label="Optimize ζ at every R" checked={state.zeta === 'opt'} onChange={(on) => update({ zeta: on ? 'opt' : 1 })} />
-          <NumberField label="R from" unit="a₀" value={state.rMinBohr} min={LIMITS.rBohr.min} max={LIMITS.rBohr.max} step={0.1} onCommit={(rMinBohr) => rMinBohr < state.rMaxBohr && update({ rMinBohr })} />
-          <NumberField label="R to" unit="a₀" value={state.rMaxBohr} min={LIMITS.rBohr.min} max={LIMITS.rBohr.max} step={0.5} onCommit={(rMaxBohr) => rMaxBohr > state.rMinBohr && update({ rMaxBohr })} />
+          <NumberField label="R from" unit="a₀" value={state.rMinBohr} min={LIMITS.rBohr.min} max={LIMITS.rBohr.max} step={0.1} validate={(v) => (v < state.rMaxBohr ? null : 'R from must be below R to.')} onCommit={(rMinBohr) => update({ rMinBohr })} />
+          <NumberField label="R to" unit="a₀" value={state.rMaxBohr} min={LIMITS.rBohr.min} max={LIMITS.rBohr.max} step={0.5} validate={(v) => (v > state.rMinBohr ? null : 'R to must be above R from.')} onCommit={(rMaxBohr) => update({ rMaxBohr })} />
           <NumberField label="Grid points" value={state.points} integer min={LIMITS.points.min} max={LIMITS.points.max} onCommit={(points) => update({ points })} />
         </>
       ) : null}
