@@ -16,4 +16,5 @@ export const commands: readonly CommandEntry[] = [
   { name: 'point', load: async () => (await import('./point')).pointCommand },
   { name: 'diagram', load: async () => (await import('./diagram')).diagramCommand },
   { name: 'huckel', load: async () => (await import('./huckel')).huckelCommand },
+  { name: 'mark', load: async () => (await import('./mark')).markCommand },
 ];

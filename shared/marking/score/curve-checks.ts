@@ -78,7 +78,7 @@ export function curveDeviation(check: Extract<Check, { kind: 'curve-rms' | 'curv
   ];
   if (check.removeShift) parts.push(` after removing a constant shift of ${formatSmall(energyIn(shift, reading.units.energy))} ${eu}`);
   if (reading.convention === 'relative') {
-    parts.push(` (relative energies: the model's dissociation limit ${formatFixed(energyIn(reference.dissociationLimitHartree, reading.units.energy), 6)} ${eu} was added to each)`);
+    parts.push(`, relative energies with the model's dissociation limit ${formatFixed(energyIn(reference.dissociationLimitHartree, reading.units.energy), 6)} ${eu} added to each`);
   }
   parts.push(`, expected at most ${fullShown} ${eu} for full points`);
   if (check.credit === 'all-or-nothing') parts.push(' (all or nothing)');

@@ -163,7 +163,7 @@ describe('markReport: curve deviation and partial credit', () => {
     const reading = readingOf(lcao, { convention: 'relative', transform: (e) => e.map((v) => v - limit) });
     const result = markReport({ spec: { scheme: defaultCurveScheme({ antibonding: true }) }, reference: lcao, reading });
     expect(result.total).toBe(12);
-    expect(result.checks[0].message).toContain("relative energies: the model's dissociation limit −0.500000 Eₕ was added");
+    expect(result.checks[0].message).toContain("), relative energies with the model's dissociation limit −0.500000 Eₕ added to each, expected at most");
     expect(result.checks[2].message).toContain('from the tail of your relative energies');
   });
 
