@@ -307,16 +307,17 @@ describe('markReport: reference at distances off the exercise grid', () => {
     expect(worst).toBeGreaterThan(bound / 100); // the bound is the right size, not a loose one
   });
   it('keeps the per-reference work: a second report on the same off-grid distances reuses the computed energies', () => {
-    const fresh = referenceOf({ ...lcaoModel, method: 'exact', states: ['bonding'], grid: { unit: 'bohr', start: 1, end: 6, step: 0.5 } });
+    const fresh = referenceOf({ ...lcaoModel, states: ['bonding'], grid: { unit: 'bohr', start: 1, end: 6, step: 0.5 } });
     const distances = [1.1, 1.3, 1.7, 2.2, 2.9, 3.3, 4.1, 5.2];
-    const t0 = performance.now();
-    referenceEnergiesAt(fresh, 'bonding', distances);
-    const first = performance.now() - t0;
-    const t1 = performance.now();
+    const first = referenceEnergiesAt(fresh, 'bonding', distances);
+    expect(first.failure).toBeNull();
+    // spoil the model parameters: computing again would now fail, reusing does not
+    (fresh.params as { zeta: number }).zeta = -1;
     const again = referenceEnergiesAt(fresh, 'bonding', distances);
-    const second = performance.now() - t1;
-    expect(second).toBeLessThan(first / 5);
-    expect(again.offGrid).toBe(8);
+    expect(again.failure).toBeNull();
+    expect(Array.from(again.energyHartree)).toEqual(Array.from(first.energyHartree));
+    const other = referenceEnergiesAt(fresh, 'bonding', [1.15, 1.35, 1.75]);
+    expect(other.failure).toMatch(/zeta|ζ|exponent/i); // a new distance list is computed (and here fails)
   });
 });
 

@@ -130,6 +130,6 @@ describe('findSimilarReports', () => {
     });
     const t = performance.now();
     expect(findSimilarReports(reports)).toEqual([]);
-    expect(performance.now() - t).toBeLessThan(5000);
+    expect(performance.now() - t).toBeLessThan(15_000); // ≈ 0.7 s on an idle 2-core machine; loose for busy CI
   });
 });
