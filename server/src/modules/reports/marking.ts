@@ -39,8 +39,18 @@ export function referenceFor(revisionId: number, spec: ExerciseSpec, variant: Va
   return reference;
 }
 
+const dueMoments = new Map<string, number>();
+
+/** The due instant of a spec (wall-clock time in its zone), remembered: Intl time-zone lookups are slow. */
 export function dueAtOf(spec: Pick<ExerciseSpec, 'dueLocal' | 'timeZone'>): Date {
-  return zonedWallTimeToInstant(spec.dueLocal, spec.timeZone);
+  const key = `${spec.dueLocal}|${spec.timeZone}`;
+  let ms = dueMoments.get(key);
+  if (ms === undefined) {
+    ms = zonedWallTimeToInstant(spec.dueLocal, spec.timeZone).getTime();
+    if (dueMoments.size > 1000) dueMoments.clear();
+    dueMoments.set(key, ms);
+  }
+  return new Date(ms);
 }
 
 export interface MarkInputs {

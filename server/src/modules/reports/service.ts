@@ -128,12 +128,29 @@ function answersOf(template: TemplateInfo | undefined): ReportAnswers | null {
   return Object.keys(out).length ? out : null;
 }
 
+const startsWith = (bytes: Uint8Array, magic: number[]) => magic.every((b, i) => bytes[i] === b);
+
+/**
+ * The file's type by content. Containers (zip, OLE2) and PDFs are told by their
+ * magic bytes and examined by detectFileType; anything else is text for the
+ * reader to decode (once — it says what it found) or refuse.
+ */
+function sniffContainer(bytes: Uint8Array, fileName: string): { kind: string; description: string } {
+  const head = bytes.subarray(0, 1024);
+  const container = startsWith(bytes, [0x50, 0x4b]) || startsWith(bytes, [0xd0, 0xcf, 0x11, 0xe0]) || Buffer.from(head).includes('%PDF-');
+  if (container || bytes.length === 0) {
+    const d = detectFileType(bytes, fileName);
+    return { kind: d.kind, description: d.description };
+  }
+  return { kind: 'text', description: 'text' };
+}
+
 /** Reads the data file (and checks the write-up) without storing anything; refusals are 422 with the reader's place. */
 export async function readUpload(spec: ExerciseSpec, data: ReceivedFile, writeup: ReceivedFile | null, choice: ReportChoice | undefined): Promise<ReadUpload> {
   if (writeup) checkWriteup(writeup);
   if (spec.writeUp === 'none' && writeup) throw new HttpError(422, 'bad_request', 'This exercise takes no write-up: upload the data file only.', { field: 'writeup', reader: { code: 'writeup_not_taken' } });
   const bytes = new Uint8Array(data.bytes.buffer, data.bytes.byteOffset, data.bytes.byteLength);
-  const detected = detectFileType(bytes, data.fileName);
+  const detected = sniffContainer(bytes, data.fileName);
   const kindAllowed = detected.kind === 'xlsx' ? spec.allowedFileTypes.includes('xlsx') : detected.kind === 'text' ? spec.allowedFileTypes.some((t) => t === 'csv' || t === 'tsv') : true;
   if (!kindAllowed) {
     throw new HttpError(422, 'bad_request', `"${data.fileName}" is ${detected.description}; this exercise takes ${spec.allowedFileTypes.map((t) => t.toUpperCase()).join(', ')} files.`, {
@@ -153,6 +170,7 @@ export async function readUpload(spec: ExerciseSpec, data: ReceivedFile, writeup
       })
     : await readReport(bytes, { fileName: data.fileName });
   if (result.ok) {
+    if (result.table.kind === 'csv') detected.description = `text (${result.table.encoding ? result.table.encoding.toUpperCase() : 'UTF-8'})`;
     return { data, writeup, detected, reading: result, answers: answersOf(result.template), template: result.template ?? null };
   }
   // An answers-only exercise (MO diagram, Hückel) is handed in as a template with answer cells, or a
@@ -314,24 +332,29 @@ export async function storeUpload(db: Knex, caller: Caller, target: UploadTarget
   const submittedAt = new Date();
   const exercise = target.exercise;
   const stored = storedReadingOf(read, extraWarnings);
-  const extension = await extensionMinutes(db, exercise.id, target.enrolment.id);
+  // The student's variant of the current revision is drawn once and kept (as a template download
+  // would); it is not part of the upload, so it is made before the upload's transaction.
+  const [extension, uploader, variant] = await Promise.all([
+    extensionMinutes(db, exercise.id, target.enrolment.id),
+    db('users').where({ id: caller.id }).first('display_name'),
+    ensureVariant(db, { id: exercise.id, course_id: exercise.course_id }, exercise.revision_id, target.enrolment.id),
+  ]);
+  if (read.template?.variantKey && read.template.variantKey !== variant.variantKey) {
+    stored.warnings.push(`The template was made for variant ${read.template.variantKey}; the exercise now gives this student variant ${variant.variantKey}, which is what the report is marked against.`);
+  }
+  // Pure computation (the reference is cached per revision and variant): kept out of the transaction.
+  const mark = markWithReference({
+    revisionId: exercise.revision_id,
+    spec: target.spec,
+    variant: variant.variant,
+    reading: markableOf(stored),
+    answers: stored.answers,
+    submittedAt,
+    extensionMinutes: extension,
+  });
+  const checks = storedChecks(mark);
 
   const result = await db.transaction(async (trx) => {
-    const variant = await ensureVariant(trx, { id: exercise.id, course_id: exercise.course_id }, exercise.revision_id, target.enrolment.id);
-    if (read.template?.variantKey && read.template.variantKey !== variant.variantKey) {
-      stored.warnings.push(`The template was made for variant ${read.template.variantKey}; the exercise now gives this student variant ${variant.variantKey}, which is what the report is marked against.`);
-    }
-    // Marking is pure computation (the reference is cached per variant), done inside the
-    // transaction only so that it uses the variant the transaction sees.
-    const mark = markWithReference({
-      revisionId: exercise.revision_id,
-      spec: target.spec,
-      variant: variant.variant,
-      reading: markableOf(stored),
-      answers: stored.answers,
-      submittedAt,
-      extensionMinutes: extension,
-    });
     const dataFileId = await insertStoredFile(trx, {
       sha256: read.data.sha256,
       sizeBytes: read.data.sizeBytes,
@@ -355,7 +378,7 @@ export async function storeUpload(db: Knex, caller: Caller, target: UploadTarget
       uploadedBy: caller.id,
       uploadedAt: submittedAt,
     });
-    await insertMark(trx, {
+    const markId = await insertMark(trx, {
       reportId,
       revisionId: exercise.revision_id,
       engineVersion: mark.engineVersion,
@@ -363,7 +386,7 @@ export async function storeUpload(db: Knex, caller: Caller, target: UploadTarget
       max: mark.max,
       latePenaltyPercent: mark.latePenaltyPercent,
       total: mark.total,
-      checks: storedChecks(mark),
+      checks,
     });
     await recordAudit(trx, {
       actorId: caller.id,
@@ -382,12 +405,44 @@ export async function storeUpload(db: Knex, caller: Caller, target: UploadTarget
       },
     });
     const similarityJobId = await enqueueOnce(trx, SIMILARITY_JOB, 'exerciseId', { exerciseId: exercise.id, courseId: exercise.course_id });
-    return { reportId, similarityJobId };
+    return { reportId, markId, versionNo, similarityJobId };
   });
 
-  const row = await findReport(db, result.reportId);
-  const [summary] = await summariesOf(db, [row!], target.spec, { showMarks: target.access.isStaff || Boolean(caller.isAdmin) });
-  return { report: summary, similarityJobId: result.similarityJobId };
+  // The answer is made from what was just written (no second round of queries).
+  const showMark = target.access.isStaff || Boolean(caller.isAdmin);
+  const markRow: MarkRow = {
+    id: result.markId,
+    report_id: result.reportId,
+    revision_id: exercise.revision_id,
+    revision_no: exercise.revision_no ?? 0,
+    engine_version: mark.engineVersion,
+    points: mark.points,
+    max_points: mark.max,
+    late_penalty_percent: mark.latePenaltyPercent,
+    total: mark.total,
+    checks_json: checks,
+    created_at: submittedAt,
+  };
+  const report: ReportSummary = {
+    id: result.reportId,
+    exerciseId: exercise.id,
+    enrolmentId: target.enrolment.id,
+    versionNo: result.versionNo,
+    state: 'submitted',
+    uploadedAt: submittedAt.toISOString(),
+    returnedAt: null,
+    uploadedBy: { id: caller.id, displayName: uploader?.display_name ?? '' },
+    onBehalf: target.enrolment.user_id !== caller.id,
+    dataFile: { fileName: read.data.fileName, sizeBytes: read.data.sizeBytes, detectedType: read.detected.kind, sha256: read.data.sha256 },
+    writeup: read.writeup ? { fileName: read.writeup.fileName, sizeBytes: read.writeup.sizeBytes, detectedType: 'pdf', sha256: read.writeup.sha256 } : null,
+    units: stored.units ? { distance: stored.units.distance, energy: stored.units.energy } : null,
+    convention: stored.convention,
+    pointCount: stored.points?.distance.length ?? 0,
+    warnings: stored.warnings,
+    late: lateStatusOf(target.spec, submittedAt, extension),
+    mark: showMark ? markViewOf(markRow, []) : null,
+  };
+  return { report, similarityJobId: result.similarityJobId };
 }
 
 /* ------------------------------------------------------------------ */
