@@ -20,6 +20,10 @@ export const testAccounts: StandInAccount[] = [
   { login: 'stu1', email: 'stu1@test.example', givenName: 'Stella', familyName: 'Student' },
   { login: 'stu2', email: 'stu2@test.example', givenName: 'Sam', familyName: 'Student' },
   { login: 'nobody', email: 'nobody@test.example', givenName: 'Noor', familyName: 'Norole' },
+  // an account whose address the provider has not verified (it claims a roster student's and an admin's address)
+  { login: 'unverified', email: 'roster.only@test.example', givenName: 'Una', familyName: 'Verified', emailVerified: false },
+  { login: 'unverified-admin', email: 'adm2@test.example', givenName: 'Ulla', familyName: 'Claimant', emailVerified: false },
+  { login: 'roster-only', email: 'roster.only@test.example', givenName: 'Rosa', familyName: 'Rostered' },
 ];
 
 export interface AppContext {

@@ -19,6 +19,8 @@ export interface StandInAccount {
   familyName: string;
   /** shown on the sign-in page as a hint (e.g. "lecturer") */
   hint?: string;
+  /** whether the provider vouches for the address (default true) */
+  emailVerified?: boolean;
 }
 
 export interface StandInClient {
@@ -96,7 +98,7 @@ export async function startIdentityProvider(opts: StandInOptions): Promise<Runni
       return {
         accountId: id,
         async claims() {
-          return { sub: id, email: a.email, email_verified: true, name: `${a.givenName} ${a.familyName}`, given_name: a.givenName, family_name: a.familyName };
+          return { sub: id, email: a.email, email_verified: a.emailVerified ?? true, name: `${a.givenName} ${a.familyName}`, given_name: a.givenName, family_name: a.familyName };
         },
       };
     },

@@ -12,6 +12,8 @@ export interface SignInClaims {
   issuer: string;
   subject: string;
   email: string;
+  /** the provider vouches for the e-mail address (OIDC `email_verified`) */
+  emailVerified: boolean;
   displayName: string;
 }
 
@@ -22,8 +24,10 @@ export async function recordSignIn(db: Knex, claims: SignInClaims, adminEmails: 
     let user = await findUserBySubject(trx, claims.issuer, claims.subject);
     const now = new Date();
     // A person known from a course roster who signs in for the first time: the roster
-    // made a users row without an identity; attach this identity to it (matched by e-mail).
-    const fromRoster = user
+    // made a users row without an identity; attach this identity to it (matched by e-mail),
+    // but only when the provider has verified that address — otherwise anyone able to
+    // claim a student's address at the provider could take over their roster entry.
+    const fromRoster = user || !claims.emailVerified
       ? undefined
       : await trx<UserRow>('users').whereNull('oidc_subject').andWhere('email', claims.email).orderBy('id').forUpdate().first();
     if (fromRoster) {
@@ -45,7 +49,7 @@ export async function recordSignIn(db: Knex, claims: SignInClaims, adminEmails: 
       if (!user.active) throw new InactiveAccountError('This account has been deactivated.');
       await trx('users').where({ id: user.id }).update({ email: claims.email, display_name: claims.displayName, last_sign_in_at: now, updated_at: now });
     }
-    if (adminEmails.has(claims.email.toLowerCase())) {
+    if (claims.emailVerified && adminEmails.has(claims.email.toLowerCase())) {
       const inserted = await trx.raw('INSERT IGNORE INTO user_site_roles (user_id, role) VALUES (?, ?)', [user.id, 'admin']);
       if (inserted[0]?.affectedRows) {
         await recordAudit(trx, { actorId: user.id, action: 'site_role.granted_by_configuration', entityType: 'user', entityId: user.id, after: { role: 'admin' } });

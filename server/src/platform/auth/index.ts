@@ -19,6 +19,23 @@ import { InactiveAccountError, recordSignIn } from '../../modules/session/servic
 import { findUserById, siteRolesOf } from '../../modules/session/repo';
 import type { OidcEndpoints } from './discovery';
 
+interface OidcProfile {
+  id: string;
+  displayName?: string;
+  emails?: { value: string }[];
+  name?: { givenName?: string; familyName?: string };
+  _json?: { email_verified?: unknown };
+}
+
+/** One claim of the ID token (already checked by the strategy: issuer, audience, expiry, nonce). */
+function idTokenClaim(idToken: string, claim: string): unknown {
+  try {
+    return JSON.parse(Buffer.from(idToken.split('.')[1], 'base64url').toString('utf8'))[claim];
+  } catch {
+    return undefined;
+  }
+}
+
 export interface AuthDeps {
   db: Knex;
   databaseUrl: string;
@@ -76,12 +93,16 @@ export function mountAuth(app: Express, deps: AuthDeps): AuthHandles {
         skipUserProfile: false,
         passReqToCallback: true,
       } as never,
-      // arity 6: (req, issuer, profile, context, idToken, done)
-      ((req: Request, issuer: string, profile: { id: string; displayName?: string; emails?: { value: string }[]; name?: { givenName?: string; familyName?: string } }, _context: unknown, idToken: string, done: (err: unknown, user?: Express.User | false, info?: unknown) => void) => {
+      // arity 10: (req, issuer, userinfo profile, ID-token profile, context, idToken, accessToken, refreshToken, params, done);
+      // only the userinfo profile carries the raw claims (email_verified)
+      ((req: Request, issuer: string, uiProfile: OidcProfile | undefined, idProfile: OidcProfile, _context: unknown, idToken: string, _accessToken: unknown, _refreshToken: unknown, _params: unknown, done: (err: unknown, user?: Express.User | false, info?: unknown) => void) => {
+        const profile: OidcProfile = { ...idProfile, ...(uiProfile ?? {}) };
         const email = profile.emails?.[0]?.value;
         if (!email) return done(null, false, { message: 'The identity provider did not send an e-mail address.' });
         const displayName = profile.displayName || [profile.name?.givenName, profile.name?.familyName].filter(Boolean).join(' ') || email;
-        recordSignIn(db, { issuer, subject: profile.id, email, displayName }, config.adminEmails)
+        const verifiedClaim = uiProfile?._json?.email_verified ?? idTokenClaim(idToken, 'email_verified');
+        const emailVerified = verifiedClaim === true || verifiedClaim === 'true';
+        recordSignIn(db, { issuer, subject: profile.id, email, emailVerified, displayName }, config.adminEmails)
           .then(async (user) => {
             (req as Request & { oidcIdToken?: string }).oidcIdToken = idToken;
             const roles = await siteRolesOf(db, user.id);
