@@ -4,6 +4,7 @@
  */
 import type { Knex } from 'knex';
 import { demoOtherStaff, demoRoleAccounts, demoStudents, type DemoPerson } from './demo-people';
+import { seedDemoExercises } from './demo-exercises';
 
 export async function seedDemo(knex: Knex, issuer: string): Promise<void> {
   await knex.transaction(async (trx) => {
@@ -58,6 +59,9 @@ export async function seedDemo(knex: Knex, issuer: string): Promise<void> {
     demoStudents.slice(40).forEach((p) => rows.push(enrol(moTheory, p, labM)));
     rows.push(enrol(moTheory, demoRoleAccounts[3], labM));
     await trx('enrolments').insert(rows);
+
+    // exercises of every model family, in every state, with variants for the enrolled students
+    await seedDemoExercises(trx);
 
     await trx('audit_log').insert({ actor_id: null, action: 'demo.seeded', entity_type: 'site', entity_id: null, after_json: JSON.stringify({ people: ids.size }) });
   });
