@@ -27,7 +27,12 @@ interface ReferenceCache {
   computed: Map<string, Float64Array>;
   /** anything else a caller wants to keep per reference (analysis, classification) */
   memo: Map<string, unknown>;
+  /** where each distance of a given distance array falls: grid index, OFF_GRID or OUT_OF_RANGE */
+  placements: WeakMap<object, Int32Array>;
 }
+
+const OFF_GRID = -1;
+const OUT_OF_RANGE = -2;
 
 const caches = new WeakMap<CurveReference, ReferenceCache>();
 const COMPUTED_LIMIT = 64;
@@ -41,7 +46,7 @@ export function referenceCache(reference: CurveReference): ReferenceCache {
   const gridBohr = Float64Array.from(order, (i) => reference.grid.bohr[i]);
   const energies = new Map<CurveState, Float64Array>();
   for (const c of reference.curves) energies.set(c.state, Float64Array.from(order, (i) => c.energyHartree[i]));
-  cache = { gridBohr, energies, computed: new Map(), memo: new Map() };
+  cache = { gridBohr, energies, computed: new Map(), memo: new Map(), placements: new WeakMap() };
   caches.set(reference, cache);
   return cache;
 }
@@ -89,6 +94,42 @@ function interpolate(grid: Float64Array, values: Float64Array, r: number): numbe
   return sum;
 }
 
+/**
+ * Grid index of each distance (within 1e−9 relative), OFF_GRID inside the range, OUT_OF_RANGE
+ * outside; kept per distance array object, so the columns of one report share the work. Ascending
+ * distances (what pairColumns passes) are placed by one merge pass, others by bisection.
+ */
+function placementsOf(cache: ReferenceCache, distanceBohr: ArrayLike<number>): Int32Array {
+  const key = typeof distanceBohr === 'object' ? (distanceBohr as object) : null;
+  const known = key ? cache.placements.get(key) : undefined;
+  if (known && known.length === distanceBohr.length) return known;
+  const grid = cache.gridBohr;
+  const n = distanceBohr.length;
+  const placement = new Int32Array(n).fill(OUT_OF_RANGE);
+  if (grid.length > 0) {
+    const low = grid[0] * (1 - ON_GRID_RELATIVE);
+    const high = grid[grid.length - 1] * (1 + ON_GRID_RELATIVE);
+    let j = -1;
+    let previous = Number.NEGATIVE_INFINITY;
+    for (let i = 0; i < n; i++) {
+      const r = distanceBohr[i];
+      if (!(r >= low && r <= high)) continue;
+      if (r >= previous) {
+        while (j + 1 < grid.length && grid[j + 1] <= r) j++;
+      } else {
+        j = lowerIndex(grid, r);
+      }
+      previous = r;
+      const tolerance = ON_GRID_RELATIVE * Math.max(1, r);
+      if (j >= 0 && r - grid[j] <= tolerance) placement[i] = j;
+      else if (j + 1 < grid.length && grid[j + 1] - r <= tolerance) placement[i] = j + 1;
+      else placement[i] = OFF_GRID;
+    }
+  }
+  if (key) cache.placements.set(key, placement);
+  return placement;
+}
+
 export interface ReferenceAtDistances {
   /** reference energy at each given distance (hartree), NaN outside the grid's range or when it failed */
   energyHartree: Float64Array;
@@ -113,19 +154,15 @@ export function referenceEnergiesAt(
   const n = distanceBohr.length;
   const out = new Float64Array(n).fill(Number.NaN);
   if (!values || grid.length === 0) return { energyHartree: out, inRange: 0, offGrid: 0, failure: `the reference has no ${state} curve` };
-  const low = grid[0] * (1 - ON_GRID_RELATIVE);
-  const high = grid[grid.length - 1] * (1 + ON_GRID_RELATIVE);
+  const placement = placementsOf(cache, distanceBohr);
   const offIndex: number[] = [];
   let inRange = 0;
   for (let i = 0; i < n; i++) {
-    const r = distanceBohr[i];
-    if (!(r >= low && r <= high)) continue;
+    const j = placement[i];
+    if (j === OUT_OF_RANGE) continue;
     inRange++;
-    const j = lowerIndex(grid, r);
-    const tolerance = ON_GRID_RELATIVE * Math.max(1, r);
-    if (j >= 0 && r - grid[j] <= tolerance) out[i] = values[j];
-    else if (j + 1 < grid.length && grid[j + 1] - r <= tolerance) out[i] = values[j + 1];
-    else offIndex.push(i);
+    if (j === OFF_GRID) offIndex.push(i);
+    else out[i] = values[j];
   }
   let failure: string | null = null;
   if (offIndex.length > 0) {

@@ -68,13 +68,15 @@ function columnsOf(reading: MarkableReading): Column[] {
     keys = [...ordered, ...keys.filter((k) => !ordered.includes(k))];
   }
   const distance = reading.points.distance;
+  // one distance array for every column whose points are all usable and ascending
+  let shared: Float64Array | null = null;
   return keys.map((key) => {
     const info = described.find((c) => c.key === key);
     const header = info?.header ?? key;
     const e = energies[key];
     const n = Math.min(distance.length, e.length);
     // fast path: every point usable and already ascending (what the reader hands over)
-    let clean = true;
+    let clean = n === distance.length;
     for (let i = 0; i < n && clean; i++) {
       const r = distance[i];
       const y = e[i];
@@ -83,9 +85,9 @@ function columnsOf(reading: MarkableReading): Column[] {
     let d: Float64Array;
     let en: Float64Array;
     if (clean) {
-      d = new Float64Array(n);
-      en = new Float64Array(n);
-      for (let i = 0; i < n; i++) { d[i] = distance[i]; en[i] = e[i]; }
+      shared ??= Float64Array.from(distance);
+      d = shared;
+      en = Float64Array.from(e);
     } else {
       const pairs: [number, number][] = [];
       for (let i = 0; i < n; i++) {
