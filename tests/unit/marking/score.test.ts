@@ -380,3 +380,45 @@ describe('curveReferenceAt (the command line’s reference on a file’s own R v
     expect(built.antibondingRepulsive).toBe(true);
   });
 });
+
+describe('markReport: random data never throws', () => {
+  it('300 random readings and answers give points within [0, max] and a sentence for every check', () => {
+    const random = gaussian('fuzz');
+    const pick = <T>(items: T[]) => items[Math.floor(Math.abs(random() * 1e6)) % items.length];
+    const oddNumbers = [Number.NaN, Number.POSITIVE_INFINITY, -1, 0, 1e300, -1e-300, 2.5, -0.5];
+    const allChecks = scheme([
+      rms(1e-4, 1e-2, { removeShift: true }),
+      { kind: 'curve-max', id: 'max', label: 'max', weight: 1, full: 1e-4, zero: 1e-2 },
+      { kind: 'equilibrium-distance', id: 're', label: 'Re', weight: 1, full: 0.01, zero: 0.1 },
+      { kind: 'well-depth', id: 'de', label: 'De', weight: 1, full: 0.02, zero: 0.2 },
+      { kind: 'vibrational-wavenumber', id: 'we', label: 'ωe', weight: 1, full: 20, zero: 200, isotopes: ['9Zz', '1H'] },
+      { kind: 'antibonding-repulsive', id: 'rep', label: 'rep', weight: 1 },
+      { kind: 'configuration', id: 'configuration', label: 'c', weight: 1 },
+      { kind: 'term-symbol', id: 'term', label: 't', weight: 1 },
+      { kind: 'huckel-energies', id: 'x', label: 'x', weight: 1, full: 0.01, zero: 0.1 },
+    ]);
+    for (let k = 0; k < 300; k++) {
+      const n = Math.floor(Math.abs(random()) * 12);
+      const distance = Array.from({ length: n }, () => (Math.abs(random()) < 0.2 ? pick(oddNumbers) : 0.5 + Math.abs(random()) * 6));
+      const columns = Math.floor(Math.abs(random()) * 3);
+      const energies: Record<string, number[]> = {};
+      for (let c = 0; c < columns; c++) {
+        const length = Math.abs(random()) < 0.2 ? Math.max(0, n - 2) : n;
+        energies[pick(['E', 'E+', 'E-', 'σu', 'x', `c${c}`])] = Array.from({ length }, () => (Math.abs(random()) < 0.2 ? pick(oddNumbers) : -0.5 + 0.1 * random()));
+      }
+      const reading: MarkableReading = {
+        points: { distance, energies },
+        units: { distance: pick(['bohr', 'angstrom', 'pm'] as const), energy: pick(['hartree', 'ev', 'kj/mol', 'kcal/mol', 'cm-1'] as const) },
+        convention: pick(['total', 'relative'] as const),
+      };
+      const answers = { configuration: pick(['', '(1σg)^9', '((((', 'KK', '1σg2 1σg2']), term: pick(['', '3Σ', '∞', 'sigma']), x: pick(['', 'α+β+', '1,2;3', '√']) };
+      const result = markReport({ spec: { scheme: allChecks }, reference: lcao, reading, answers });
+      for (const c of result.checks) {
+        expect(c.points).toBeGreaterThanOrEqual(0);
+        expect(c.points).toBeLessThanOrEqual(c.max);
+        expect(c.message.length).toBeGreaterThan(5);
+      }
+      expect(Number.isFinite(result.total)).toBe(true);
+    }
+  });
+});
