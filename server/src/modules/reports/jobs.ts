@@ -17,6 +17,7 @@ import { exerciseSpecSchema, type ExerciseSpec } from '@shared/exercises/spec';
 import type { Variant } from '@shared/exercises/variants';
 import { enqueue, type JobContext, type JobHandler } from '../../platform/jobs';
 import { ensureVariant } from '../exercises/variants';
+import { SIMILARITY_JOB, similarityJob } from '../similarity/jobs';
 import { markWithReference, storedChecks } from './marking';
 import {
   countReports,
@@ -105,6 +106,7 @@ export async function remarkExercise(ctx: JobContext): Promise<void> {
   await ctx.progress(total, total);
 }
 
+/** Every job kind of reports and similarity, for a worker (scripts/start.ts starts one in-process). */
 export function reportJobHandlers(): Record<string, JobHandler> {
-  return { [REMARK_JOB]: remarkExercise };
+  return { [REMARK_JOB]: remarkExercise, [SIMILARITY_JOB]: similarityJob };
 }
