@@ -228,7 +228,7 @@ describe('limits', () => {
     const error = refusal(await readReport(lying));
     expect(error.code).toBe('too_large');
     expect(error.message).toContain('beyond its declared size');
-    expect(performance.now() - started).toBeLessThan(2000); // hang guard, not a benchmark
+    expect(performance.now() - started).toBeLessThan(10_000); // hang guard, not a benchmark
   });
 
   it('pathological headers and fields stay fast (no quadratic pattern matching)', async () => {
@@ -238,7 +238,7 @@ describe('limits', () => {
       const started = performance.now();
       const result = await readReport(utf8Bytes(`R,${header}\n${body}`));
       expect(result.ok).toBe(true);
-      expect(performance.now() - started).toBeLessThan(2000); // hang guard, not a benchmark
+      expect(performance.now() - started).toBeLessThan(10_000); // hang guard, not a benchmark
       if (result.ok) expect(result.table.columns[1].header!.length).toBeLessThanOrEqual(120);
     }
   });
