@@ -126,7 +126,7 @@ async function main() {
     console.log(`Bondmark is running at ${publicUrl}  (${dev ? 'development, hot reload' : env.NODE_ENV})`);
     if (idpNote) console.log(`  sign-in: ${idpNote}; demo accounts: admin, lecturer, assistant, student`);
     if (mailNote) console.log(`  ${mailNote}`);
-    console.log('  stop with Ctrl+C (the data in .data/ is kept)');
+    console.log(`  stop with Ctrl+C (the data in ${env.DATABASE_URL ? 'your database' : path.relative(process.cwd(), dataDir) + '/'} is kept)`);
   } catch (err) {
     console.error(`\nBondmark could not start: ${(err as Error).message}`);
     await shutdown(1);
