@@ -32,7 +32,7 @@ export function choiceOf(preview: ReadPreview): ReportChoice | null {
  * warnings, the first rows and a plot of the student's own points. The
  * column and unit choices can be corrected; each change reads the file again.
  */
-export function ReadBack({ preview, choice, onChange, busy }: { preview: ReadPreview; choice: ReportChoice | null; onChange: (choice: ReportChoice) => void; busy: boolean }) {
+export function ReadBack({ preview, choice, onChange, busy, onBehalf = false }: { preview: ReadPreview; choice: ReportChoice | null; onChange: (choice: ReportChoice) => void; busy: boolean; onBehalf?: boolean }) {
   const table = preview.table;
   const numeric = table?.columns.filter((c) => c.numericCount > 0) ?? [];
   const columnName = (letter: string) => {
@@ -66,7 +66,7 @@ export function ReadBack({ preview, choice, onChange, busy }: { preview: ReadPre
             Recognised as your personal template (student number <Num>{preview.template.studentNumber}</Num>).
           </p>
         ) : null}
-        {preview.enrolment ? (
+        {onBehalf && preview.enrolment ? (
           <p className="text-[0.85rem] text-graphite">
             For {preview.enrolment.displayName} (<Num>{preview.enrolment.studentNumber}</Num>)
           </p>

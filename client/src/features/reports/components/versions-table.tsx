@@ -25,7 +25,7 @@ export function VersionsTable({ reports, loading, staff }: { reports: ReportSumm
           <Th>Data file</Th>
           <Th>Write-up</Th>
           <Th>Units</Th>
-          <Th>Due date</Th>
+          <Th>Late status</Th>
           <Th>State</Th>
           <Th className="text-right">Mark</Th>
           <Th>

@@ -230,7 +230,7 @@ export function UploadReportPage() {
 
               {preview ? (
                 <>
-                  <ReadBack preview={preview} choice={choice} onChange={onChoice} busy={busy} />
+                  <ReadBack preview={preview} choice={choice} onChange={onChoice} busy={busy} onBehalf={staffView} />
                   {noCurve ? null : (
                     <div className="flex flex-wrap items-center gap-3">
                       <Button variant="primary" onClick={() => void confirm()} disabled={busy || (!choice && !answersOnly) || (exercise.writeUp === 'required' && !writeup)}>
