@@ -43,6 +43,9 @@ beforeAll(async () => {
   }
 });
 
+/** a worker for re-marking only (the uploads also queued a similarity job, not under test here) */
+const remarkOnly = () => ({ 'remark-exercise': reportJobHandlers()['remark-exercise'] });
+
 afterAll(async () => {
   await ctx?.close();
 });
@@ -88,7 +91,7 @@ describe('re-marking job', () => {
     expect(markedByA.map((m) => m.report_id)).toEqual(firstFive);
 
     // while A's lease holds, nobody else takes the job
-    const workerB = createJobWorker({ db: ctx.db.knex, workerId: 'worker-b', handlers: reportJobHandlers() });
+    const workerB = createJobWorker({ db: ctx.db.knex, workerId: 'worker-b', handlers: remarkOnly() });
     expect(await workerB.runOnce()).toBe('idle');
     const during = await ctx.signIn('lec1');
     const progress = await during.json<JobProgress>(`${ctx.baseUrl}/api/v1/jobs/${jobId}`);
@@ -145,7 +148,7 @@ describe('re-marking job', () => {
 
   it('a job for a revision that is no longer current stops without marking', async () => {
     const [staleJob] = await ctx.db.knex('jobs').insert({ kind: 'remark-exercise', payload_json: JSON.stringify({ exerciseId, revisionId: firstRevisionId }) });
-    const worker = createJobWorker({ db: ctx.db.knex, handlers: reportJobHandlers() });
+    const worker = createJobWorker({ db: ctx.db.knex, handlers: remarkOnly() });
     const before = await ctx.db.knex('marks').count({ n: '*' }).first();
     expect(await worker.runOnce()).toBe('done');
     expect(await ctx.db.knex('marks').count({ n: '*' }).first()).toEqual(before);
