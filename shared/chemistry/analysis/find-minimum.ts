@@ -13,9 +13,11 @@
  * (estimateNoise) implies (delta method on the least-squares covariance), and
  * the largest window is kept whose Re and E(Re) agree with those of every
  * smaller window within `consistencyFactor` of the smaller window's standard
- * error. The first window is the smallest one (at least 5 points) whose two
- * ends lie `minimumRiseFactor` × σ above the lowest point (or half the well
- * depth, whichever is less), so that it resolves the well at all. Clean data
+ * error. The first window is the smallest one (at least 5 points) that rises
+ * `minimumRiseFactor` × σ above the lowest point (or half the rough well
+ * depth, whichever is less) on both sides — some point on each side of the
+ * lowest point lies that high — so that it resolves the well at all, and so
+ * that it stops growing at the end of the data at the latest. Clean data
  * so keeps the 5-point window (truncation error smallest); noisy data grows the
  * window until the quartic's bias would start to show. Growth compares the
  * mean of the next two points on each side, which keeps the choice of points
@@ -29,6 +31,9 @@
  * Returns null when there is no interior minimum: the lowest point is the
  * first or last point, no fitted polynomial has a minimum inside its window,
  * or the well is not deeper than the noise tolerance (noise-tolerance.ts).
+ * The well depth is the lower side (highest 3-point mean) minus E(Re), where
+ * E(Re) is not taken below the lowest data point: a fit that dips below all
+ * of its points cannot make a well deeper than the data show.
  */
 import { estimateNoise } from './estimate-noise';
 import {
@@ -66,7 +71,7 @@ export interface CurveMinimum {
   reStandardErrorBohr: number;
   energyStandardErrorHartree: number;
   curvatureStandardErrorHartreePerBohr2: number;
-  /** depth of the well below the lower of its two sides (maxima of 3-point means), Eh */
+  /** depth of the well: lower of its two sides (maxima of 3-point means) minus E(Re), or minus the lowest data point if that is higher, Eh */
   wellDepthHartree: number;
   /** distance range of the fit window, a0 */
   windowBohr: [number, number];
@@ -167,17 +172,31 @@ export function findMinimum(input: CurveInput, options: FindMinimumOptions = {})
   // the first window must rise clearly above the noise, but stay inside the well
   const roughDepth = Math.min(sideLevel(y, 0, lowest - 1), sideLevel(y, lowest + 1, n - 1)) - reference;
   const minimumRise = Math.min((options.minimumRiseFactor ?? DEFAULT_MINIMUM_RISE_FACTOR) * noise, 0.5 * roughDepth);
-  const rise = (from: number, to: number) => Math.min(y[from], y[to]) - reference;
+  // highest point of the window on each side of the lowest point: the window has risen on a side once
+  // any point there lies minimumRise above the lowest point (not only its end point, which at the end of
+  // the data can no longer move — requiring the end point to rise let the window grow over the whole curve)
+  let leftHighest = Number.NEGATIVE_INFINITY;
+  let rightHighest = Number.NEGATIVE_INFINITY;
   const accepted: WindowFit[] = [];
   let lo = lowest;
   let hi = lowest;
   for (let candidate = 0; candidate < MAX_CANDIDATES; candidate++) {
-    // grow the nested window to `size` points, on the lower side first (mean of its next two points)
-    while (hi - lo + 1 < size || (accepted.length === 0 && rise(lo, hi) < minimumRise && hi - lo + 1 < n)) {
+    // grow the nested window to `size` points, on the lower side first (mean of its next two points);
+    // the first window also grows until both sides have risen, which they do by the ends of the data at
+    // the latest (each side's highest point lies at least roughDepth ≥ minimumRise above the lowest point)
+    while (
+      hi - lo + 1 < size ||
+      (accepted.length === 0 && Math.min(leftHighest, rightHighest) - reference < minimumRise && hi - lo + 1 < n)
+    ) {
       const left = lo > 0 ? (lo > 1 ? 0.5 * (y[lo - 1] + y[lo - 2]) : y[lo - 1]) : Number.POSITIVE_INFINITY;
       const right = hi < n - 1 ? (hi < n - 2 ? 0.5 * (y[hi + 1] + y[hi + 2]) : y[hi + 1]) : Number.POSITIVE_INFINITY;
-      if (left <= right) lo--;
-      else hi++;
+      if (left <= right) {
+        lo--;
+        if (y[lo] > leftHighest) leftHighest = y[lo];
+      } else {
+        hi++;
+        if (y[hi] > rightHighest) rightHighest = y[hi];
+      }
     }
     size = hi - lo + 1;
     const fit = fitWindow(x, y, lo, hi, reference, noise, DEGREE);
@@ -203,11 +222,15 @@ export function findMinimum(input: CurveInput, options: FindMinimumOptions = {})
   const best = accepted[accepted.length - 1];
   if (!best) return null;
 
-  // depth of the well against both sides of the whole curve
+  // depth of the well against both sides of the whole curve (highest 3-point means on either side of
+  // Re). The bottom is the fitted E(Re), but never lower than the lowest data point: a fit can dip below
+  // every point it was fitted to (a quartic through five noisy points by several σ, a biased wide window
+  // by far more), and such a dip is the fit's, not a well the data show.
   let split = 0;
   while (split < n && x[split] < best.reBohr) split++;
   if (split === 0 || split === n) return null;
-  const wellDepthHartree = Math.min(sideLevel(y, 0, split - 1), sideLevel(y, split, n - 1)) - best.energyHartree;
+  const bottom = Math.max(best.energyHartree, reference);
+  const wellDepthHartree = Math.min(sideLevel(y, 0, split - 1), sideLevel(y, split, n - 1)) - bottom;
   if (!(wellDepthHartree > depthTolerance)) return null;
 
   return {
