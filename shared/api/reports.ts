@@ -11,7 +11,8 @@
  *   POST /exercises/:exerciseId/reports        same fields, choice required → 201 UploadResult
  *   GET  /exercises/:exerciseId/reports        [?enrolmentId= for staff] → ExerciseReports (a student's versions)
  *   GET  /exercises/:exerciseId/similarity-flags  (staff) → SimilarityFlags
- *   GET  /reports/:reportId                    → ReportDetail (staff; the student who owns it, marks once returned)
+ *   GET  /reports/:reportId                    → ReportDetail (staff; the student who owns it: the automatic mark
+ *                                              at once when the exercise's automaticMarks is 'at-once', everything once returned)
  *   GET  /reports/:reportId/data-file          → the data file as uploaded (staff; the owner)
  *   GET  /reports/:reportId/writeup            → the PDF write-up (staff; the owner)
  *   GET  /jobs/:jobId                          (staff of the job's course) → JobProgress
@@ -189,7 +190,11 @@ export const reportSummarySchema = z.object({
   pointCount: z.number().int(),
   warnings: z.array(z.string()),
   late: lateStatusSchema,
-  /** null for students until the report is returned */
+  /**
+   * Staff: the mark with its adjustments. The student: before the return, the automatic mark
+   * without adjustments when the exercise's `automaticMarks` is 'at-once' and null when it is
+   * 'on-return'; once returned, the mark with its adjustments.
+   */
   mark: markViewSchema.nullable(),
 });
 export type ReportSummary = z.infer<typeof reportSummarySchema>;
@@ -215,6 +220,8 @@ export const exerciseForStudentSchema = z.object({
   effectiveDueAt: z.string(),
   late: z.object({ graceMinutes: z.number(), penaltyPerDayPercent: z.number(), capPercent: z.number() }),
   writeUp: z.enum(['none', 'optional', 'required']),
+  /** when students see the automatic mark: on upload ('at-once', provisional until returned) or once returned */
+  automaticMarks: z.enum(['at-once', 'on-return']),
   allowedFileTypes: z.array(z.string()),
   /** students may upload now */
   acceptingUploads: z.boolean(),
@@ -254,7 +261,7 @@ export const reportDetailSchema = z.object({
     unitSources: z.object({ distance: unitSourceSchema, energy: unitSourceSchema }).nullable(),
     answers: answersSchema.nullable(),
   }),
-  /** null for a student until the report is returned; null when the exercise has no curve */
+  /** null for a student while the mark is held back (see `mark`); null when the exercise has no curve */
   overlay: overlaySchema.nullable(),
   /** the other versions of the same student (ids and numbers, newest first) */
   versions: z.array(z.object({ id: z.number().int(), versionNo: z.number().int(), uploadedAt: z.string(), state: reportStateSchema })),

@@ -165,6 +165,14 @@ export type LatePolicy = z.infer<typeof latePolicySchema>;
 
 export const uploadFileTypes = ['csv', 'tsv', 'xlsx'] as const;
 
+/**
+ * When students see the automatic mark of a report: 'at-once' (on upload,
+ * provisional until an assistant returns the report) or 'on-return' (held
+ * back until the report is returned). Staff always see it.
+ */
+export const automaticMarksOptions = ['at-once', 'on-return'] as const;
+export type AutomaticMarks = (typeof automaticMarksOptions)[number];
+
 export const exerciseSpecSchema = z
   .object({
     title: z.string().min(1, 'give the exercise a title').max(200),
@@ -178,6 +186,8 @@ export const exerciseSpecSchema = z
     late: latePolicySchema,
     allowedFileTypes: z.array(z.enum(uploadFileTypes)).min(1).default(['csv', 'tsv', 'xlsx']),
     writeUp: z.enum(['none', 'optional', 'required']).default('optional'),
+    /** specs stored before this setting existed read as 'at-once' */
+    automaticMarks: z.enum(automaticMarksOptions).default('at-once'),
     scheme: markingSchemeSchema,
   })
   .superRefine((spec, ctx) => {

@@ -31,7 +31,9 @@ let seed: SeededCourse;
 let exerciseId: number;
 let revisionId: number;
 let lateExerciseId: number;
-const spec = curveSpec();
+// marks held back until the return, so that what students see before and after it is tested here
+// (the default, marks at once, is tested in reports-student-marks.test.ts)
+const spec = curveSpec({ automaticMarks: 'on-return' });
 const fixture = (name: string) => readFileSync(new URL(`../fixtures/reports/${name}`, import.meta.url));
 
 type ErrorBody = { error: { code: string; message: string; details?: { field?: string; reader?: { code: string; row?: number; column?: string; sheet?: string } } } };
@@ -138,7 +140,7 @@ describe('storing an upload', () => {
     expect(await ctx.db.knex('jobs').where({ id: r.body.similarityJobId }).first()).toMatchObject({ kind: 'similarity-exercise', state: 'queued' });
   });
 
-  it('a student\'s upload answers the report as submitted, without marks until it is returned', async () => {
+  it('a student\'s upload answers the report as submitted, without marks until it is returned (automaticMarks on-return)', async () => {
     const r = await post<UploadResult>('stu1', `/exercises/${exerciseId}/reports`, uploadForm({ name: 'curve-v2.csv', bytes: stu1Csv({ noiseHartree: 2e-4, seed: 3 }) }, { choice: bohrHartreeChoice }));
     expect(r.status).toBe(201);
     expect(r.body.report).toMatchObject({ versionNo: 2, state: 'submitted', onBehalf: false, mark: null });

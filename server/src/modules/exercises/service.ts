@@ -85,7 +85,7 @@ const iso = (d: Date | string | null): string | null => (d === null ? null : (d 
 const isoNN = (d: Date | string) => iso(d)!;
 const dueAtOf = (spec: Pick<ExerciseSpec, 'dueLocal' | 'timeZone'>) => zonedWallTimeToInstant(spec.dueLocal, spec.timeZone).toISOString();
 
-const specFields: (keyof ExerciseSpec)[] = ['title', 'instructionsMarkdown', 'model', 'variantSeed', 'dueLocal', 'timeZone', 'late', 'allowedFileTypes', 'writeUp', 'scheme'];
+const specFields: (keyof ExerciseSpec)[] = ['title', 'instructionsMarkdown', 'model', 'variantSeed', 'dueLocal', 'timeZone', 'late', 'allowedFileTypes', 'writeUp', 'automaticMarks', 'scheme'];
 
 /** Top-level spec fields that differ between two specs. */
 export function changedFields(before: ExerciseSpec, after: ExerciseSpec): string[] {

@@ -409,7 +409,7 @@ export async function storeUpload(db: Knex, caller: Caller, target: UploadTarget
   });
 
   // The answer is made from what was just written (no second round of queries).
-  const showMark = target.access.isStaff || Boolean(caller.isAdmin);
+  const showMark = markVisibility(target.access.isStaff || Boolean(caller.isAdmin), target.spec, 'submitted') !== 'none';
   const markRow: MarkRow = {
     id: result.markId,
     report_id: result.reportId,
@@ -504,8 +504,22 @@ function markViewOf(mark: MarkRow, adjustments: AdjustmentRow[]): MarkView {
   };
 }
 
-/** Report rows → summaries; `showMarks` false hides marks of reports not yet returned (students). */
-export async function summariesOf(db: Knex, rows: ReportRow[], spec: ExerciseSpec, options: { showMarks: boolean }): Promise<ReportSummary[]> {
+export type MarkVisibility = 'full' | 'automatic' | 'none';
+
+/**
+ * How much of a report's mark the caller sees. Staff: all of it. The student
+ * it belongs to: all of it once the report is returned; before that, the
+ * automatic mark alone (checks, feedback, total, late penalty — no human
+ * adjustments, which are work in progress until the return) when the
+ * exercise's `automaticMarks` is 'at-once', and nothing when it is 'on-return'.
+ */
+export function markVisibility(staff: boolean, spec: Pick<ExerciseSpec, 'automaticMarks'>, state: ReportRow['state']): MarkVisibility {
+  if (staff || state === 'returned') return 'full';
+  return spec.automaticMarks === 'on-return' ? 'none' : 'automatic';
+}
+
+/** Report rows → summaries; for students (`staff` false) the mark as `markVisibility` allows. */
+export async function summariesOf(db: Knex, rows: ReportRow[], spec: ExerciseSpec, options: { staff: boolean }): Promise<ReportSummary[]> {
   const ids = rows.map((r) => r.id);
   const [marks, adjustments] = await Promise.all([currentMarks(db, ids), currentAdjustments(db, ids)]);
   const extensions = new Map<number, number>();
@@ -515,7 +529,7 @@ export async function summariesOf(db: Knex, rows: ReportRow[], spec: ExerciseSpe
   return rows.map((r) => {
     const reading = parseJson<StoredReading>(r.reading_json);
     const mark = marks.get(r.id);
-    const visible = options.showMarks || r.state === 'returned';
+    const visibility = markVisibility(options.staff, spec, r.state);
     return {
       id: r.id,
       exerciseId: r.exercise_id,
@@ -533,7 +547,7 @@ export async function summariesOf(db: Knex, rows: ReportRow[], spec: ExerciseSpe
       pointCount: reading.points?.distance.length ?? 0,
       warnings: reading.warnings,
       late: lateStatusOf(spec, new Date(r.uploaded_at), extensions.get(r.enrolment_id) ?? 0),
-      mark: visible && mark ? markViewOf(mark, adjustments.get(r.id) ?? []) : null,
+      mark: visibility !== 'none' && mark ? markViewOf(mark, visibility === 'full' ? (adjustments.get(r.id) ?? []) : []) : null,
     };
   });
 }
@@ -552,6 +566,7 @@ export function exerciseForStudentOf(exercise: ExerciseWithRevisionRow, spec: Ex
     effectiveDueAt: new Date(dueAt.getTime() + extension * 60_000).toISOString(),
     late: { graceMinutes: spec.late.graceMinutes, penaltyPerDayPercent: spec.late.penaltyPerDayPercent, capPercent: spec.late.capPercent },
     writeUp: spec.writeUp,
+    automaticMarks: spec.automaticMarks,
     allowedFileTypes: spec.allowedFileTypes,
     acceptingUploads: exercise.state === 'published' || (exercise.state === 'closed' && onBehalf),
     limits,
@@ -566,7 +581,7 @@ export async function studentReports(db: Knex, caller: Caller, exerciseId: numbe
   return {
     exercise: exerciseForStudentOf(target.exercise, target.spec, extension, limits, target.onBehalf),
     enrolment: { id: target.enrolment.id, studentNumber: target.enrolment.student_number, displayName: target.enrolment.display_name },
-    reports: await summariesOf(db, rows, target.spec, { showMarks: target.access.isStaff }),
+    reports: await summariesOf(db, rows, target.spec, { staff: target.access.isStaff }),
   };
 }
 
@@ -620,11 +635,11 @@ export function overlayOf(stored: StoredReading, revisionId: number, spec: Exerc
 export async function reportDetail(db: Knex, caller: Caller, reportId: number): Promise<ReportDetail> {
   const { row, exercise, enrolment, staff } = await reportForCaller(db, caller, reportId);
   const spec = specOf(exercise.spec_json);
-  const [summary] = await summariesOf(db, [row], spec, { showMarks: staff });
+  const [summary] = await summariesOf(db, [row], spec, { staff });
   const stored = parseJson<StoredReading>(row.reading_json);
   const variantRow = await findVariantById(db, row.variant_id);
   const variant = parseJson<Variant>(variantRow!.variant_json);
-  const showResult = staff || row.state === 'returned';
+  const showResult = markVisibility(staff, spec, row.state) !== 'none';
   // the overlay is drawn against the revision of the current mark
   const revisionId = summary.mark?.revisionId ?? exercise.revision_id!;
   let overlaySpec = spec;
