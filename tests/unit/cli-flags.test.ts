@@ -33,7 +33,7 @@ describe('distance grids start:end:step', () => {
 
 describe('dispatcher', () => {
   it('has one entry per command, each loading the command of that name', async () => {
-    expect(commands.map((c) => c.name)).toEqual(['curve', 'minimum', 'point', 'diagram', 'huckel']);
+    expect(commands.map((c) => c.name)).toEqual(['curve', 'minimum', 'point', 'diagram', 'huckel', 'mark']);
     for (const entry of commands) expect((await entry.load()).name).toBe(entry.name);
   });
   it('passes a negative number through to the validation (--r -1), and exits 2', async () => {
