@@ -6,7 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { startAppContext, type AppContext } from '../support/app-context';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, signInWithBrowser } from '../support/browser';
 import { ensureClientBuilt } from '../../scripts/lib/client-build';
 
 let ctx: AppContext;
@@ -31,15 +31,7 @@ afterAll(async () => {
 });
 
 async function signInAs(login: string): Promise<Page> {
-  const page = await browser.newPage();
-  await page.goto(`${ctx.baseUrl}/courses`);
-  await page.waitForURL(/\/signin/);
-  await page.getByRole('button', { name: /Sign in with your university account/ }).or(page.getByRole('link', { name: /Sign in with your university account/ })).click();
-  await page.waitForURL(new RegExp(`^${ctx.issuer}/interaction/`));
-  await page.getByLabel('University login').fill(login);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.waitForURL(`${ctx.baseUrl}/courses`);
-  return page;
+  return signInWithBrowser(browser, ctx, login);
 }
 
 const rows = async (table: string, courseId: number) => Number((await ctx.db.knex(table).where({ course_id: courseId }).count({ n: '*' }).first())!.n);

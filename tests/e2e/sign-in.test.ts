@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { startAppContext, type AppContext } from '../support/app-context';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, signInWithBrowser } from '../support/browser';
 import { ensureClientBuilt } from '../../scripts/lib/client-build';
 
 let ctx: AppContext;
@@ -25,18 +25,8 @@ afterAll(async () => {
   await ctx?.close();
 });
 
-async function signInAs(login: string) {
-  const page = await browser.newPage();
-  await page.goto(`${ctx.baseUrl}/courses`);
-  // not signed in: the app sends us to its sign-in screen
-  await page.waitForURL(/\/signin/);
-  await page.getByRole('button', { name: /Sign in with your university account/ }).or(page.getByRole('link', { name: /Sign in with your university account/ })).click();
-  // the identity provider's page
-  await page.waitForURL(new RegExp(`^${ctx.issuer}/interaction/`));
-  await page.getByLabel('University login').fill(login);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.waitForURL(`${ctx.baseUrl}/courses`);
-  return page;
+async function signInAs(login: string): Promise<Page> {
+  return signInWithBrowser(browser, ctx, login);
 }
 
 describe('signing in with a browser', () => {

@@ -5,10 +5,10 @@
 import ExcelJS from 'exceljs';
 import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { exerciseSpecSchema } from '@shared/exercises/spec';
 import { startAppContext, type AppContext } from '../support/app-context';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, signInWithBrowser } from '../support/browser';
 import { ensureClientBuilt } from '../../scripts/lib/client-build';
 
 let ctx: AppContext;
@@ -64,16 +64,8 @@ afterAll(async () => {
   await ctx?.close();
 });
 
-async function signInAs(login: string) {
-  const page = await browser.newPage({ acceptDownloads: true });
-  await page.goto(`${ctx.baseUrl}/courses`);
-  await page.waitForURL(/\/signin/);
-  await page.getByRole('button', { name: /Sign in with your university account/ }).or(page.getByRole('link', { name: /Sign in with your university account/ })).click();
-  await page.waitForURL(new RegExp(`^${ctx.issuer}/interaction/`));
-  await page.getByLabel('University login').fill(login);
-  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await page.waitForURL(`${ctx.baseUrl}/courses`);
-  return page;
+async function signInAs(login: string): Promise<Page> {
+  return signInWithBrowser(browser, ctx, login, { acceptDownloads: true });
 }
 
 describe('My exercises in a browser', () => {
