@@ -2,7 +2,10 @@
  * A student hands in a report in a real browser: picks a CSV whose header
  * names the wrong distance unit, sees what was read, corrects the unit,
  * drops a PDF write-up on its slot, confirms, and sees the report as
- * submitted in the version history.
+ * submitted in the version history with its automatic mark (the exercise
+ * gives marks at once, the default): the checks with their feedback, the
+ * total, marked provisional, and the plot against the reference — on the
+ * upload page and on the report's own page.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
@@ -40,7 +43,7 @@ function mislabelledCsv(): string {
 }
 
 describe('uploading a report', () => {
-  it('a student uploads a CSV, corrects the distance unit, confirms, and sees the report as submitted', async () => {
+  it('a student uploads a CSV, corrects the distance unit, confirms, and sees the report as submitted with its automatic mark', async () => {
     const page = await browser.newPage();
     await page.goto(`${ctx.baseUrl}/my/exercises/${exerciseId}/upload`);
     await page.waitForURL(/\/signin/);
@@ -84,11 +87,7 @@ describe('uploading a report', () => {
     expect(await done.textContent()).toContain('Version 1 submitted');
     expect(await done.textContent()).toContain('On time');
 
-    const row = page.getByTestId('version-row');
-    await expect.poll(() => row.count()).toBe(1);
-    expect(await row.textContent()).toContain('Submitted');
-    expect(await row.textContent()).toContain('my-curve.csv');
-    expect(await row.textContent()).toContain('after return');
+    expect(await done.textContent()).toContain('automatic mark is below');
 
     // what was stored: the corrected unit, the write-up, and a mark with full points (the file is the reference)
     const report = await ctx.db.knex('reports').where({ exercise_id: exerciseId, enrolment_id: seed.enrolments.stu1 }).first();
@@ -96,7 +95,39 @@ describe('uploading a report', () => {
     expect(reading.units).toMatchObject({ distance: 'bohr', distanceSource: 'user' });
     expect(report.writeup_file_id).not.toBeNull();
     const mark = await ctx.db.knex('marks').where({ report_id: report.id }).first();
-    expect(Number(mark.total)).toBe(Number(mark.max_points));
+    const max = Number(mark.max_points);
+    expect(max).toBeGreaterThan(0);
+    expect(Number(mark.total)).toBe(max);
+
+    const row = page.getByTestId('version-row');
+    await expect.poll(() => row.count()).toBe(1);
+    expect(await row.textContent()).toContain('Submitted');
+    expect(await row.textContent()).toContain('my-curve.csv');
+    // the student sees the automatic total, provisional until the report is returned
+    expect(await row.textContent()).toContain(`${max} of ${max}`);
+    expect(await row.textContent()).toContain('provisional');
+
+    // the newest version's mark on the upload page: labelled automatic and provisional, a row per check with its feedback
+    const newest = page.getByTestId('newest-mark');
+    await expect.poll(() => newest.getByRole('heading', { name: /Automatic mark of version 1/ }).count()).toBe(1);
+    expect(await newest.getByTestId('mark-total').textContent()).toContain(`${max} of ${max} points`);
+    expect(await newest.getByTestId('mark-provisional-note').textContent()).toMatch(/provisional until an assistant returns the report/);
+    const checks = newest.getByTestId('check-row');
+    expect(await checks.count()).toBe(4); // curve RMS, Re, De, antibonding repulsive (the fixture's default scheme)
+    for (const text of await checks.allTextContents()) expect(text.length).toBeGreaterThan(30);
+    // and the plot of the student's points against the reference
+    await expect.poll(() => newest.getByTestId('overlay-plot').count(), { timeout: 15_000 }).toBe(1);
+
+    // the report's own page says the same
+    await row.getByRole('link', { name: 'Open version 1' }).click();
+    await page.waitForURL(`${ctx.baseUrl}/reports/${report.id}`);
+    const view = page.getByTestId('mark-view');
+    await expect.poll(() => view.count()).toBe(1);
+    expect(await view.getAttribute('data-provisional')).toBe('true');
+    expect(await view.getByRole('heading', { name: /Automatic mark/ }).textContent()).toContain('Provisional');
+    expect(await view.getByTestId('mark-total').textContent()).toContain(`${max} of ${max} points`);
+    await expect.poll(() => page.getByTestId('overlay-plot').count()).toBe(1);
+    expect(await page.getByTestId('not-returned').count()).toBe(0);
     await page.close();
   });
 

@@ -1,25 +1,40 @@
 import type { MarkView as Mark } from '@shared/api/reports';
 import { Num } from '@client/components/ui/num';
+import { StatusText } from '@client/components/ui/status-text';
 import { Table, Td, Th } from '@client/components/ui/table';
 import { formatPoints } from '../lib/series';
 
-/** The checks of a mark with their feedback sentences; adjustments (if any) beside the automatic points. */
-export function MarkView({ mark, showRevision = false }: { mark: Mark; showRevision?: boolean }) {
+/**
+ * The checks of a mark with their feedback sentences; adjustments (if any) beside the automatic points.
+ * `provisional`: a student's automatic mark before the report is returned, labelled as such.
+ */
+export function MarkView({ mark, showRevision = false, provisional = false, title }: { mark: Mark; showRevision?: boolean; provisional?: boolean; title?: string }) {
   const adjusted = new Map(mark.adjustments.map((a) => [a.checkId, a]));
   const hasAdjustments = mark.adjustments.length > 0;
   return (
-    <section aria-labelledby="mark-heading" className="flex flex-col gap-3" data-testid="mark-view">
+    <section aria-labelledby="mark-heading" className="flex flex-col gap-3" data-testid="mark-view" data-provisional={provisional ? 'true' : undefined}>
       <div className="flex flex-wrap items-baseline justify-between gap-3">
-        <h2 id="mark-heading" className="font-serif text-xl font-semibold">
-          Mark
+        <h2 id="mark-heading" className="flex flex-wrap items-baseline gap-x-3 font-serif text-xl font-semibold">
+          {title ?? (provisional ? 'Automatic mark' : 'Mark')}
+          {provisional ? (
+            <span className="font-sans text-[0.85rem] font-normal">
+              <StatusText tone="caution">Provisional</StatusText>
+            </span>
+          ) : null}
         </h2>
         <p className="text-[0.95rem]" data-testid="mark-total">
           <Num className="text-lg font-semibold">{formatPoints(hasAdjustments ? mark.adjustedTotal : mark.total)}</Num>
-          <span className="text-graphite"> / </span>
+          <span className="text-graphite"> of </span>
           <Num>{formatPoints(mark.max)}</Num>
+          <span className="text-graphite"> points</span>
           {mark.latePenaltyPercent > 0 ? <span className="ml-2 text-caution">(late: −{mark.latePenaltyPercent}%)</span> : null}
         </p>
       </div>
+      {provisional ? (
+        <p className="text-[0.9rem] text-graphite" data-testid="mark-provisional-note">
+          The automatic mark of this version, given when it was uploaded. It is provisional until an assistant returns the report, and may still be adjusted.
+        </p>
+      ) : null}
       <Table label="Checks of the automatic marking">
         <thead>
           <tr>

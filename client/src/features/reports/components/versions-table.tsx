@@ -39,7 +39,9 @@ export function VersionsTable({ reports, loading, staff }: { reports: ReportSumm
         ) : (
           reports.map((r) => {
             const state = stateWords[r.state];
-            const open = staff || r.state === 'returned';
+            // a student opens a version once its mark is theirs to see (at once or after the return, by the exercise)
+            const open = staff || r.state === 'returned' || r.mark !== null;
+            const provisional = !staff && r.state !== 'returned';
             return (
               <tr key={r.id} data-testid="version-row" data-version={r.versionNo} className="hover:bg-paper">
                 <Td>
@@ -74,9 +76,12 @@ export function VersionsTable({ reports, loading, staff }: { reports: ReportSumm
                 </Td>
                 <Td className="text-right whitespace-nowrap">
                   {r.mark ? (
-                    <Num>
-                      {formatPoints(r.mark.adjustments.length ? r.mark.adjustedTotal : r.mark.total)} / {formatPoints(r.mark.max)}
-                    </Num>
+                    <>
+                      <Num>
+                        {formatPoints(r.mark.adjustments.length ? r.mark.adjustedTotal : r.mark.total)} of {formatPoints(r.mark.max)}
+                      </Num>
+                      {provisional ? <div className="text-[0.8rem] text-graphite">automatic, provisional</div> : null}
+                    </>
                   ) : (
                     <span className="text-graphite">{staff ? '—' : 'after return'}</span>
                   )}

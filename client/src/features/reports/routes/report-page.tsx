@@ -21,7 +21,8 @@ const sourceWords: Record<string, string> = { header: 'header', magnitude: 'gues
 /**
  * /reports/:reportId — one report: for staff its reading, the checks with
  * their feedback, the overlay plot and the files; for the student who handed
- * it in, the same once it has been returned.
+ * it in, the automatic mark and the plot at once (provisional until the report
+ * is returned) or, when the exercise holds marks back, once it is returned.
  */
 export function ReportPage() {
   const reportId = Number(useParams().reportId);
@@ -120,7 +121,7 @@ export function ReportPage() {
         </section>
 
         {r.mark ? (
-          <MarkView mark={r.mark} showRevision={staff} />
+          <MarkView mark={r.mark} showRevision={staff} provisional={!staff && r.state !== 'returned'} />
         ) : (
           <EmptyState title="Not returned yet" testId="not-returned">
             Marks, feedback and the plot against the reference appear here once the report is returned.

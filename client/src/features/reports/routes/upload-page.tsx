@@ -1,6 +1,6 @@
 import { useCallback, useRef, useState } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router';
-import type { ReadPreview, ReadRefusalDetails, ReportChoice, UploadResult } from '@shared/api/reports';
+import type { ReadPreview, ReadRefusalDetails, ReportChoice, ReportSummary, UploadResult } from '@shared/api/reports';
 import { Button } from '@client/components/ui/button';
 import { DateTime } from '@client/components/ui/date-time';
 import { EmptyState } from '@client/components/ui/empty-state';
@@ -11,10 +11,13 @@ import { StatusText } from '@client/components/ui/status-text';
 import { isApiError } from '@client/lib/api';
 import { formatInZone } from '@client/features/my-exercises/lib/due-text';
 import { useExerciseReports } from '../api/get-exercise-reports';
+import { useReport } from '../api/get-report';
 import { useReadReport, useUploadReport } from '../api/upload-report';
 import type { UploadProgress } from '../api/send-upload';
 import { DropZone } from '../components/drop-zone';
 import { LateStatusText } from '../components/late-status';
+import { MarkView } from '../components/mark-view';
+import { OverlayPlot } from '../components/overlay-plot';
 import { ProgressBar } from '../components/progress-bar';
 import { ReadBack, choiceOf } from '../components/read-back';
 import { VersionsTable } from '../components/versions-table';
@@ -37,6 +40,30 @@ function Refusal({ error }: { error: unknown }) {
           Where: <Num>{place.join(', ')}</Num>
           {details?.reader?.expected ? <> — expected {details.reader.expected}</> : null}
         </p>
+      ) : null}
+    </div>
+  );
+}
+
+/**
+ * The newest version's mark with the plot against the reference. A student sees it at once when
+ * the exercise gives automatic marks at once (labelled provisional until the report is returned).
+ */
+function NewestVersionMark({ report, staff }: { report: ReportSummary & { mark: NonNullable<ReportSummary['mark']> }; staff: boolean }) {
+  const detail = useReport(report.id);
+  const provisional = !staff && report.state !== 'returned';
+  const overlay = detail.data?.overlay;
+  return (
+    <div className="flex flex-col gap-4" data-testid="newest-mark">
+      <MarkView mark={report.mark} provisional={provisional} showRevision={staff} title={`${provisional ? 'Automatic mark' : 'Mark'} of version ${report.versionNo}`} />
+      {detail.isError ? (
+        <p className="text-[0.9rem] text-antibonding">The plot against the reference could not be loaded: {detail.error.message}</p>
+      ) : !detail.data ? (
+        <p role="status" className="text-[0.9rem] text-graphite">
+          Loading the plot against the reference…
+        </p>
+      ) : overlay ? (
+        <OverlayPlot overlay={overlay} title={staff ? 'Student against reference' : 'Your data against the reference'} fileBase={`report-${report.id}-overlay`} />
       ) : null}
     </div>
   );
@@ -134,6 +161,7 @@ export function UploadReportPage() {
   const staffView = enrolmentId !== undefined;
   const noCurve = preview !== null && preview.table === null && !preview.answers;
   const answersOnly = preview !== null && preview.table === null && Boolean(preview.answers);
+  const newest = data?.reports[0];
 
   return (
     <>
@@ -148,6 +176,14 @@ export function UploadReportPage() {
               {exercise.late.penaltyPerDayPercent > 0
                 ? `Late uploads lose ${exercise.late.penaltyPerDayPercent}% per started day${exercise.late.graceMinutes ? ` after ${exercise.late.graceMinutes} minutes' grace` : ''}, at most ${exercise.late.capPercent}%.`
                 : 'Late uploads are not penalised.'}
+              {!staffView ? (
+                <>
+                  {' '}
+                  {exercise.automaticMarks === 'at-once'
+                    ? 'You see the automatic mark of each version as soon as it is uploaded; it is provisional until an assistant returns the report.'
+                    : 'Marks and feedback appear once an assistant returns your report.'}
+                </>
+              ) : null}
               {data?.enrolment && staffView ? (
                 <>
                   {' '}
@@ -182,7 +218,11 @@ export function UploadReportPage() {
                 {done.report.writeup ? <> with {done.report.writeup.fileName}</> : null}
               </p>
               <p className="text-[0.85rem] text-graphite">
-                {done.report.mark ? 'The automatic mark is below.' : 'Your marks and feedback appear here once your assistant returns the report.'}
+                {done.report.mark
+                  ? staffView
+                    ? 'The automatic mark is below.'
+                    : 'Its automatic mark is below; it is provisional until an assistant returns the report.'
+                  : 'Your marks and feedback appear here once your assistant returns the report.'}
               </p>
             </div>
           ) : null}
@@ -248,6 +288,8 @@ export function UploadReportPage() {
           ) : (
             <EmptyState title="Uploads are closed">This exercise no longer takes reports. Your versions so far are below.</EmptyState>
           )}
+
+          {newest?.mark ? <NewestVersionMark key={newest.id} report={{ ...newest, mark: newest.mark }} staff={staffView} /> : null}
 
           <section aria-labelledby="versions-heading" className="flex flex-col gap-2">
             <h2 id="versions-heading" className="font-serif text-xl font-semibold">
