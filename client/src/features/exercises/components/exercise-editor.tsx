@@ -3,7 +3,8 @@
  * (plus the engine's checks), messages beside each field, the marking
  * scheme, a live preview of any variant's Reference and the answer key; for
  * a saved exercise the state changes (publish, close, reopen) with their
- * confirmations, and saving a published one asks before re-marking.
+ * confirmations, and saving a published one asks before re-marking and then
+ * shows the re-marking job's progress.
  */
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { checkedExerciseSpecSchema, exerciseSpecEngineIssues, remarkConfirmationDetailsSchema, type ExerciseMutationResponse, type StaffExercise } from '@shared/api/exercises';
@@ -12,6 +13,7 @@ import { Button } from '@client/components/ui/button';
 import { Num } from '@client/components/ui/num';
 import { StatusText } from '@client/components/ui/status-text';
 import { isApiError } from '@client/lib/api';
+import { JobProgress } from '@client/features/reports/components/job-progress';
 import { useCreateExercise, useExerciseTransition, useUpdateExercise } from '../api/mutations';
 import { fieldId, issuesFromDetails, issuesFromZod, type IssueMap } from '../lib/form-issues';
 import { switchFamily, timeZoneOptions } from '../lib/spec-defaults';
@@ -60,6 +62,8 @@ export function ExerciseEditor({
   const [pending, setPending] = useState<Pending>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
+  /** the re-marking job queued by the last save, followed until it is done */
+  const [remarkJobId, setRemarkJobId] = useState<number | null>(null);
   const summaryRef = useRef<HTMLDivElement>(null);
   const readOnly = exercise ? !exercise.permissions.author : false;
 
@@ -115,6 +119,7 @@ export function ExerciseEditor({
       {
         onSuccess: (r) => {
           setPending(null);
+          setRemarkJobId(r.remarkJobId ?? null);
           setNotice(
             r.unchanged
               ? 'Nothing had changed.'
@@ -206,6 +211,11 @@ export function ExerciseEditor({
           {notice}
         </p>
       ) : null}
+      {remarkJobId ? (
+        <section aria-label="Re-marking progress" className="rounded-[3px] border border-rule bg-sheet px-4 py-3" data-testid="remark-progress">
+          <JobProgress jobId={remarkJobId} label="Re-marking the reports" />
+        </section>
+      ) : null}
       {failure && !(showErrors && errorList.length) ? (
         <p role="alert" className="rounded-[3px] border border-antibonding/50 bg-sheet px-4 py-2 text-antibonding" data-testid="editor-failure">
           {failure}
@@ -272,6 +282,18 @@ export function ExerciseEditor({
                   ['none', 'None'],
                   ['optional', 'Optional'],
                   ['required', 'Required'],
+                ]}
+              />
+              <SelectField
+                path="automaticMarks"
+                label="Students see the automatic mark"
+                hint="At once: each upload shows its automatic mark, feedback and plot, marked provisional until an assistant returns the report. On return: nothing until then."
+                issues={issues}
+                value={spec.automaticMarks ?? 'at-once'}
+                onChange={(v) => set('automaticMarks', v)}
+                options={[
+                  ['at-once', 'At once (provisional)'],
+                  ['on-return', 'On return'],
                 ]}
               />
               <fieldset className="min-w-0 sm:col-span-2" data-field="allowedFileTypes">

@@ -20,9 +20,11 @@ export function JobProgress({ jobId, label }: { jobId: number; label?: string })
   if (!data) return <ProgressBar label={title} fraction={null} testId="job-progress" />;
   if (data.state === 'failed') {
     return (
-      <div data-testid="job-progress" role="status">
-        <StatusText tone="bad">{title} stopped</StatusText>
-        <p className="text-[0.85rem] text-graphite">{data.error}</p>
+      <div data-testid="job-progress" data-state="failed" className="flex flex-col gap-1">
+        <ProgressBar label={`${title}: stopped`} fraction={data.total > 0 ? data.done / data.total : 0} tone="antibonding" detail={`${data.done} of ${data.total}`} />
+        <p role="status">
+          <StatusText tone="bad">{title} stopped</StatusText> <span className="text-[0.85rem] text-graphite">{data.error}</span>
+        </p>
       </div>
     );
   }
