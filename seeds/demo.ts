@@ -5,6 +5,7 @@
 import type { Knex } from 'knex';
 import { demoOtherStaff, demoRoleAccounts, demoStudents, type DemoPerson } from './demo-people';
 import { seedDemoExercises } from './demo-exercises';
+import { seedDemoReports } from './demo-reports';
 
 export async function seedDemo(knex: Knex, issuer: string): Promise<void> {
   await knex.transaction(async (trx) => {
@@ -62,6 +63,8 @@ export async function seedDemo(knex: Knex, issuer: string): Promise<void> {
 
     // exercises of every model family, in every state, with variants for the enrolled students
     await seedDemoExercises(trx);
+    // reports in every state: on time, late, resubmitted, flagged, being reviewed, returned
+    await seedDemoReports(trx);
 
     await trx('audit_log').insert({ actor_id: null, action: 'demo.seeded', entity_type: 'site', entity_id: null, after_json: JSON.stringify({ people: ids.size }) });
   });
