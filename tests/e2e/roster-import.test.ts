@@ -19,7 +19,7 @@ beforeAll(async () => {
   const [lec] = await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: 'lec1', email: 'lec1@test.example', display_name: 'Lena Lecturer' });
   await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: 'ta1', email: 'ta1@test.example', display_name: 'Tariq Assistant' });
   const [term] = await k('terms').insert({ name: 'Spring 2027', starts_on: '2027-01-11', ends_on: '2027-05-07' });
-  // lec1 already lectures a course, which is what lets a lecturer create courses
+  // lec1 is already lecturer on a course, which is what lets a lecturer create courses
   const [earlier] = await k('courses').insert({ term_id: term, code: 'TST 410', title: 'Bonding in practice' });
   await k('course_staff').insert({ course_id: earlier, user_id: lec, role: 'lecturer' });
   browser = await launchBrowser();

@@ -39,7 +39,7 @@ export async function assistantSectionIds(db: Knex | Knex.Transaction, userId: n
   return rows.map((r) => r.id as number);
 }
 
-/** Admins, and people who lecture on at least one course, may create courses and read the term list. */
+/** Admins, and people who are lecturer on at least one course, may create courses and read the term list. */
 export async function assertMayCreateCourses(db: Knex, req: Request): Promise<void> {
   if (!req.user) throw unauthenticated();
   if (req.user.isAdmin) return;
