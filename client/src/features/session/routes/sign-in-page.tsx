@@ -63,7 +63,7 @@ export function SignInPage() {
             <div className="mt-6 border-t border-rule pt-4 text-[0.92rem] text-graphite">
               <p>
                 <strong className="font-semibold text-student">Students:</strong> sign in with the same university account
-                to download your personal template, upload your report and read the feedback once it is returned.
+                to download your personal template, upload your report, see its automatic mark and read the feedback once it is returned.
                 Bondmark does not keep a separate password.
               </p>
             </div>
