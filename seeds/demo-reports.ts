@@ -31,7 +31,7 @@ import { recordAudit } from '../server/src/platform/audit';
 import { ensureVariant } from '../server/src/modules/exercises/variants';
 import { markWithReference, referenceFor, storedChecks } from '../server/src/modules/reports/marking';
 import { insertMark, insertReport, insertStoredFile, parseJson } from '../server/src/modules/reports/repo';
-import { markableOf, readUpload, type ReadUpload, type StoredReading } from '../server/src/modules/reports/service';
+import { markableOf, readUpload, storedReadingOf, type ReadUpload } from '../server/src/modules/reports/service';
 import type { ReceivedFile } from '../server/src/modules/reports/uploads';
 import { runSimilarity } from '../server/src/modules/similarity/service';
 
@@ -396,37 +396,6 @@ const received = (fileName: string, bytes: Buffer): ReceivedFile => ({ fileName,
 /* ------------------------------------------------------------------ */
 
 const curveFamilies = new Set(['one-electron', 'two-electron']);
-
-/** What the reports module stores of a reading (service.ts storedReadingOf). */
-function storedReadingOf(read: ReadUpload): StoredReading {
-  const r = read.reading;
-  return {
-    fileName: read.data.fileName,
-    detected: read.detected,
-    table: r
-      ? {
-          kind: r.table.kind,
-          sheet: r.table.sheet,
-          headerRow: r.table.headerRow,
-          rows: r.table.rows,
-          columns: r.table.columns.map((c) => ({ letter: c.letter, header: c.header, key: c.key, role: c.role, curve: c.curve, headerUnit: c.headerUnit, numericCount: c.numericCount })),
-        }
-      : null,
-    choice: r ? { sheet: r.choice.sheet, distanceColumn: r.choice.distanceColumn, energyColumns: [...r.choice.energyColumns] } : null,
-    units: r ? { distance: r.units.distance, energy: r.units.energy, distanceSource: r.units.distanceSource, energySource: r.units.energySource } : null,
-    convention: r?.convention ?? 'total',
-    warnings: [...(r?.warnings ?? [])],
-    template: read.template ? { exerciseId: read.template.exerciseId, variantKey: read.template.variantKey, studentNumber: read.template.studentNumber } : null,
-    answers: read.answers,
-    points: r
-      ? {
-          distance: Array.from(r.points.distance),
-          energies: Object.fromEntries(Object.entries(r.points.energies).map(([k, v]) => [k, Array.from(v)])),
-          rowNumbers: Array.from(r.points.rowNumbers),
-        }
-      : null,
-  };
-}
 
 /** Reads a file as an upload does: for curves the reader's own proposal is shown and confirmed. */
 async function readAsUploaded(spec: ExerciseSpec, data: ReceivedFile, writeup: ReceivedFile | null): Promise<ReadUpload> {

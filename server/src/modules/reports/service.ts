@@ -265,7 +265,8 @@ export interface StoredReading {
   points: { distance: number[]; energies: Record<string, number[]>; rowNumbers: number[] } | null;
 }
 
-function storedReadingOf(read: ReadUpload, extraWarnings: string[]): StoredReading {
+/** What a reports row stores of a reading; `extraWarnings` follow the reader's own warnings. */
+export function storedReadingOf(read: ReadUpload, extraWarnings: string[] = []): StoredReading {
   const r = read.reading;
   return {
     fileName: read.data.fileName,
