@@ -6,7 +6,7 @@ import { Table, Td, Th } from '@client/components/ui/table';
 import { RoleBadge } from '@client/components/ui/role-badge';
 import { useAddStaff, useRemoveStaff, useSetCourseArchived, useUpdateCourse } from '../api/course-mutations';
 import { useTerms } from '../api/get-terms';
-import { ConfirmDialog } from '../components/confirm-dialog';
+import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { CourseForm } from '../components/course-form';
 import { FormError, SelectField, TextField } from '../components/form-fields';
 import { useCourseFromLayout } from '../lib/course-context';

@@ -10,6 +10,7 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import { checkedExerciseSpecSchema, exerciseSpecEngineIssues, remarkConfirmationDetailsSchema, type ExerciseMutationResponse, type StaffExercise } from '@shared/api/exercises';
 import { modelSpecSchema, uploadFileTypes, type ExerciseSpecInput, type ModelSpec } from '@shared/exercises/spec';
 import { Button } from '@client/components/ui/button';
+import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { Num } from '@client/components/ui/num';
 import { StatusText } from '@client/components/ui/status-text';
 import { isApiError } from '@client/lib/api';
@@ -18,7 +19,6 @@ import { useCreateExercise, useExerciseTransition, useUpdateExercise } from '../
 import { fieldId, issuesFromDetails, issuesFromZod, type IssueMap } from '../lib/form-issues';
 import { switchFamily, timeZoneOptions } from '../lib/spec-defaults';
 import { formatDueLocal } from '../lib/due';
-import { ConfirmDialog } from './confirm-dialog';
 import { FieldShell, Fieldset, NumberField, SelectField, TextField, inputClasses } from './fields';
 import { MarkdownField } from './markdown-field';
 import { ModelFields } from './model-fields';
@@ -346,6 +346,9 @@ export function ExerciseEditor({
         open={pending?.kind === 'remark'}
         title={pending?.kind === 'remark' ? `Save as revision ${pending.nextRevisionNo} and re-mark?` : ''}
         confirmLabel="Save and re-mark"
+        tone="primary"
+        focus="confirm"
+        busyLabel="Working…"
         busy={update.isPending}
         onCancel={() => setPending(null)}
         onConfirm={() => save(true)}
@@ -363,15 +366,15 @@ export function ExerciseEditor({
           </p>
         ) : null}
       </ConfirmDialog>
-      <ConfirmDialog open={pending?.kind === 'publish'} title="Publish this exercise?" confirmLabel="Publish" busy={transition.isPending} onCancel={() => setPending(null)} onConfirm={() => runTransition('publish', 'Published.')}>
+      <ConfirmDialog open={pending?.kind === 'publish'} title="Publish this exercise?" confirmLabel="Publish" tone="primary" focus="confirm" busyLabel="Working…" busy={transition.isPending} onCancel={() => setPending(null)} onConfirm={() => runTransition('publish', 'Published.')}>
         <p>
           Publishing freezes revision <Num>{exercise?.revision.revisionNo}</Num> and draws a variant for each of the <Num>{counts?.students ?? 0}</Num> students on the roster. Students then see the exercise and can fetch their template. Later changes make a new revision and re-mark reports.
         </p>
       </ConfirmDialog>
-      <ConfirmDialog open={pending?.kind === 'close'} title="Close this exercise?" confirmLabel="Close exercise" tone="danger" busy={transition.isPending} onCancel={() => setPending(null)} onConfirm={() => runTransition('close', 'Closed.')}>
+      <ConfirmDialog open={pending?.kind === 'close'} title="Close this exercise?" confirmLabel="Close exercise" tone="danger" focus="confirm" busyLabel="Working…" busy={transition.isPending} onCancel={() => setPending(null)} onConfirm={() => runTransition('close', 'Closed.')}>
         <p>Students keep seeing it, but it is marked closed. You can reopen it later.</p>
       </ConfirmDialog>
-      <ConfirmDialog open={pending?.kind === 'reopen'} title="Reopen this exercise?" confirmLabel="Reopen" busy={transition.isPending} onCancel={() => setPending(null)} onConfirm={() => runTransition('publish', 'Reopened.')}>
+      <ConfirmDialog open={pending?.kind === 'reopen'} title="Reopen this exercise?" confirmLabel="Reopen" tone="primary" focus="confirm" busyLabel="Working…" busy={transition.isPending} onCancel={() => setPending(null)} onConfirm={() => runTransition('publish', 'Reopened.')}>
         <p>It becomes published again; students enrolled since it closed get their variants now.</p>
       </ConfirmDialog>
     </div>

@@ -6,7 +6,7 @@ import { Button, buttonClasses } from '@client/components/ui/button';
 import { DateTime } from '@client/components/ui/date-time';
 import { ErrorNotice } from '@client/components/ui/error-notice';
 import { Num } from '@client/components/ui/num';
-import { ConfirmDialog } from '@client/features/courses/components/confirm-dialog';
+import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { FormError, inputClasses } from '@client/features/courses/components/form-fields';
 import { useCourseFromLayout } from '@client/features/courses/lib/course-context';
 import { useSections } from '@client/features/sections/api/get-sections';

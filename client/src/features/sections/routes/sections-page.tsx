@@ -6,7 +6,7 @@ import { ErrorNotice } from '@client/components/ui/error-notice';
 import { Num } from '@client/components/ui/num';
 import { StatusText } from '@client/components/ui/status-text';
 import { SkeletonRows, Table, Td, Th } from '@client/components/ui/table';
-import { ConfirmDialog } from '@client/features/courses/components/confirm-dialog';
+import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { FormError } from '@client/features/courses/components/form-fields';
 import { useCourseFromLayout } from '@client/features/courses/lib/course-context';
 import { useCreateSection, useSections, useSetSectionArchived, useUpdateSection } from '../api/get-sections';

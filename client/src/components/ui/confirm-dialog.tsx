@@ -1,10 +1,13 @@
 import { useEffect, useId, useRef, type ReactNode } from 'react';
-import { Button } from '@client/components/ui/button';
-import { FormError } from './form-fields';
+import { FormError } from '@client/features/courses/components/form-fields';
+import { Button } from './button';
 
 /**
- * A modal question before a destructive or far-reaching action (native
- * <dialog>: focus is trapped, Escape cancels). The safe choice has the focus.
+ * A modal question before a destructive or far-reaching step (native
+ * <dialog>: focus stays inside, Escape cancels, focus returns to the opener on
+ * close). The dialog is named by its title. By default the safe choice
+ * (Cancel) has the focus; `focus="confirm"` gives it to the action instead.
+ * `busyLabel`, when given, replaces the action's label while `busy`.
  */
 export function ConfirmDialog({
   open,
@@ -14,8 +17,10 @@ export function ConfirmDialog({
   onConfirm,
   onCancel,
   busy = false,
+  busyLabel,
   error,
   tone = 'danger',
+  focus = 'cancel',
 }: {
   open: boolean;
   title: string;
@@ -24,8 +29,10 @@ export function ConfirmDialog({
   onConfirm: () => void;
   onCancel: () => void;
   busy?: boolean;
+  busyLabel?: string;
   error?: unknown;
   tone?: 'danger' | 'primary';
+  focus?: 'cancel' | 'confirm';
 }) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
@@ -57,11 +64,11 @@ export function ConfirmDialog({
             </div>
           ) : null}
           <div className="mt-5 flex justify-end gap-2">
-            <Button onClick={onCancel} disabled={busy} autoFocus>
+            <Button onClick={onCancel} disabled={busy} autoFocus={focus === 'cancel'}>
               Cancel
             </Button>
-            <Button variant={tone} onClick={onConfirm} disabled={busy} aria-busy={busy || undefined}>
-              {confirmLabel}
+            <Button variant={tone} onClick={onConfirm} disabled={busy} aria-busy={busy || undefined} autoFocus={focus === 'confirm'}>
+              {busy && busyLabel ? busyLabel : confirmLabel}
             </Button>
           </div>
         </div>
