@@ -16,7 +16,8 @@ import { DateTime } from '@client/components/ui/date-time';
 import { Num } from '@client/components/ui/num';
 import { RoleBadge } from '@client/components/ui/role-badge';
 import { StatusText } from '@client/components/ui/status-text';
-import { SkeletonRows, Table, Td, Th } from '@client/components/ui/table';
+import { SortableHead } from '@client/components/ui/sortable-head';
+import { SkeletonRows, Table, Td } from '@client/components/ui/table';
 
 /** Column ids; also the values of `sort` in the URL. */
 export const PEOPLE_COLUMN_IDS = ['name', 'email', 'siteRole', 'status', 'lastSignIn', 'added'] as const;
@@ -86,14 +87,6 @@ const columns = [
   }),
 ];
 
-function SortMark({ direction }: { direction: false | 'asc' | 'desc' }) {
-  return (
-    <span aria-hidden="true" className={`num text-[0.75rem] ${direction ? 'text-reference' : 'text-rule-strong'}`}>
-      {direction === 'asc' ? '▲' : direction === 'desc' ? '▼' : '△'}
-    </span>
-  );
-}
-
 /**
  * Everyone with an account. Sorting and the filter are controlled by the page
  * (which keeps them in the URL); the table only renders and reports changes.
@@ -141,32 +134,7 @@ export function PeopleTable({
       )}
     </p>
     <Table label="People" busy={loading} testId="people-table">
-      <thead>
-        {table.getHeaderGroups().map((group) => (
-          <tr key={group.id}>
-            {group.headers.map((header) => {
-              const direction = header.column.getIsSorted();
-              return (
-                <Th
-                  key={header.id}
-                  aria-sort={direction === 'asc' ? 'ascending' : direction === 'desc' ? 'descending' : 'none'}
-                  flush
-                >
-                  <button
-                    type="button"
-                    onClick={header.column.getToggleSortingHandler()}
-                    className="flex w-full items-center gap-1.5 px-3 py-2 text-left font-semibold hover:bg-rule/40 hover:text-ink"
-                    data-testid={`sort-${header.column.id}`}
-                  >
-                    {flexRender(header.column.columnDef.header, header.getContext())}
-                    <SortMark direction={direction} />
-                  </button>
-                </Th>
-              );
-            })}
-          </tr>
-        ))}
-      </thead>
+      <SortableHead table={table} />
       <tbody>
         {loading ? (
           <SkeletonRows columns={columns.length} rows={8} label="Loading people" />

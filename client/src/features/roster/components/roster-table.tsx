@@ -16,7 +16,8 @@ import type { Section } from '@shared/api/sections';
 import { Button } from '@client/components/ui/button';
 import { Num } from '@client/components/ui/num';
 import { StatusText } from '@client/components/ui/status-text';
-import { SkeletonRows, Table, Td, Th } from '@client/components/ui/table';
+import { SortableHead } from '@client/components/ui/sortable-head';
+import { SkeletonRows, Table, Td } from '@client/components/ui/table';
 import { matchesText } from '../lib/roster-filters';
 
 const byText: SortingFn<RosterEntry> = (a, b, id) =>
@@ -27,14 +28,6 @@ const textFilter: FilterFn<RosterEntry> = (row, _id, value) => matchesText(row.o
 const fullName = (e: RosterEntry) => [e.givenName, e.familyName].filter(Boolean).join(' ') || e.studentNumber;
 
 const column = createColumnHelper<RosterEntry>();
-
-function SortMark({ direction }: { direction: false | 'asc' | 'desc' }) {
-  return (
-    <span aria-hidden="true" className={`num text-[0.75rem] ${direction ? 'text-reference' : 'text-rule-strong'}`}>
-      {direction === 'asc' ? '▲' : direction === 'desc' ? '▼' : '△'}
-    </span>
-  );
-}
 
 /**
  * The roster: sortable by every column, filtered by the page (URL state).
@@ -171,29 +164,7 @@ export function RosterTable({
         )}
       </p>
       <Table label="Roster" busy={loading} testId="roster-table">
-        <thead>
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => {
-                const direction = header.column.getIsSorted();
-                if (!header.column.getCanSort()) return <Th key={header.id}>{flexRender(header.column.columnDef.header, header.getContext())}</Th>;
-                return (
-                  <Th key={header.id} aria-sort={direction === 'asc' ? 'ascending' : direction === 'desc' ? 'descending' : 'none'} flush>
-                    <button
-                      type="button"
-                      onClick={header.column.getToggleSortingHandler()}
-                      className="flex w-full items-center gap-1.5 px-3 py-2 text-left font-semibold hover:bg-rule/40 hover:text-ink"
-                      data-testid={`sort-${header.column.id}`}
-                    >
-                      {flexRender(header.column.columnDef.header, header.getContext())}
-                      <SortMark direction={direction} />
-                    </button>
-                  </Th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
+        <SortableHead table={table} />
         <tbody>
           {loading ? (
             <SkeletonRows columns={columns.length} rows={8} label="Loading the roster" />
