@@ -7,12 +7,8 @@ import type { Knex } from 'knex';
 
 type Db = Knex | Knex.Transaction;
 
-/** mysql2 gives JSON columns back as text on MariaDB (JSON is LONGTEXT there). */
-export function parseJson<T>(value: unknown): T {
-  if (typeof value === 'string') return JSON.parse(value) as T;
-  if (Buffer.isBuffer(value)) return JSON.parse(value.toString('utf8')) as T;
-  return value as T;
-}
+/** JSON columns come back as text on MariaDB; one reader for every module. */
+export { parseJson } from '../exercises/repo';
 
 export interface ExerciseWithRevisionRow {
   id: number;
@@ -53,7 +49,8 @@ export interface EnrolmentRow {
   display_name: string;
 }
 
-const enrolmentColumns = (db: Db) => [
+/** Columns of an EnrolmentRow, from `enrolments as en` joined with `users as u`. */
+export const enrolmentColumns = (db: Db) => [
   'en.id',
   'en.course_id',
   'en.user_id',

@@ -5,6 +5,7 @@
  * exercises module (ensureVariant).
  */
 import type { Knex } from 'knex';
+import { enrolmentColumns, type EnrolmentRow } from '../reports/repo';
 
 type Db = Knex | Knex.Transaction;
 
@@ -39,32 +40,15 @@ export function exerciseForTemplate(db: Db, exerciseId: number): Promise<Exercis
     );
 }
 
-export interface EnrolmentForTemplate {
-  id: number;
-  course_id: number;
-  user_id: number;
-  student_number: string;
-  status: 'active' | 'withdrawn';
-  section_id: number | null;
-  /** given and family name from the roster, else the account's display name */
-  name: string;
-}
+/**
+ * An enrolment with the name to print (given and family name from the roster,
+ * else the account's display name): the reports module's enrolment row.
+ */
+export type EnrolmentForTemplate = EnrolmentRow;
 
-const enrolmentColumns = (db: Db) => [
-  'en.id',
-  'en.course_id',
-  'en.user_id',
-  'en.student_number',
-  'en.status',
-  'en.section_id',
-  db.raw("COALESCE(NULLIF(TRIM(CONCAT_WS(' ', en.given_name, en.family_name)), ''), u.display_name) as name"),
-];
+export { findEnrolment as enrolmentById, extensionMinutes } from '../reports/repo';
 
 const enrolments = (db: Db) => db('enrolments as en').join('users as u', 'u.id', 'en.user_id');
-
-export function enrolmentById(db: Db, enrolmentId: number): Promise<EnrolmentForTemplate | undefined> {
-  return enrolments(db).where('en.id', enrolmentId).first(enrolmentColumns(db));
-}
 
 /** The caller's own enrolment in a course (any status). */
 export function ownEnrolment(db: Db, userId: number, courseId: number): Promise<EnrolmentForTemplate | undefined> {
@@ -82,12 +66,6 @@ export function sectionById(db: Db, sectionId: number): Promise<{ id: number; co
 
 export async function isAssistantOfSection(db: Db, userId: number, sectionId: number): Promise<boolean> {
   return Boolean(await db('section_assistants').where({ user_id: userId, section_id: sectionId }).first('section_id'));
-}
-
-/** Extra minutes granted to one student for one exercise: the latest grant replaces earlier ones. */
-export async function extensionMinutes(db: Db, exerciseId: number, enrolmentId: number): Promise<number> {
-  const row = await db('extensions').where({ exercise_id: exerciseId, enrolment_id: enrolmentId }).orderBy('id', 'desc').first('extra_minutes');
-  return Number(row?.extra_minutes ?? 0);
 }
 
 export interface MyExerciseRow {

@@ -69,7 +69,7 @@ async function buildFor(db: Knex, published: Published, enrolment: EnrolmentForT
       dueAt: zonedWallTimeToInstant(spec.dueLocal, spec.timeZone),
       extensionMinutes: await extensionMinutes(db, exercise.id, enrolment.id),
     },
-    student: { number: enrolment.student_number, name: enrolment.name },
+    student: { number: enrolment.student_number, name: enrolment.display_name },
     variant: { key: variant.variantKey, templateToken: variant.templateToken, value: variant.variant },
     generatedAt: new Date(),
   });
