@@ -6,6 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startAppContext, type AppContext } from '../support/app-context';
 import { CookieClient } from '../support/cookie-client';
+import { seedPeople, seedTwoCourses } from '../support/seed-people';
 import type { CourseDetail, Term } from '@shared/api/courses';
 import type { Section } from '@shared/api/sections';
 
@@ -33,25 +34,8 @@ const count = async (table: string, where: Record<string, unknown> = {}) => Numb
 beforeAll(async () => {
   ctx = await startAppContext();
   const k = ctx.db.knex;
-  for (const [login, name] of [
-    ['adm', 'Ada Admin'],
-    ['lec1', 'Lena Lecturer'],
-    ['lec2', 'Leo Otherlecturer'],
-    ['ta1', 'Tariq Assistant'],
-    ['stu1', 'Stella Student'],
-    ['stu2', 'Sam Student'],
-    ['nobody', 'Noor Norole'],
-  ]) {
-    [ids[login]] = await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: login, email: `${login}@test.example`, display_name: name });
-  }
-  [ids.term] = await k('terms').insert({ name: 'Test term', starts_on: '2026-09-01', ends_on: '2026-12-20' });
-  [ids.c1] = await k('courses').insert({ term_id: ids.term, code: 'TST 101', title: 'Test course one' });
-  [ids.c2] = await k('courses').insert({ term_id: ids.term, code: 'TST 202', title: 'Test course two' });
-  await k('course_staff').insert([
-    { course_id: ids.c1, user_id: ids.lec1, role: 'lecturer' },
-    { course_id: ids.c1, user_id: ids.ta1, role: 'assistant' },
-    { course_id: ids.c2, user_id: ids.lec2, role: 'lecturer' },
-  ]);
+  const people = await seedPeople(k, ctx.issuer, ['adm', 'lec1', 'lec2', 'ta1', 'stu1', 'stu2', 'nobody']);
+  Object.assign(ids, people, await seedTwoCourses(k, people));
   await k('enrolments').insert({ course_id: ids.c1, user_id: ids.stu1, student_number: '1000001' });
 });
 

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startAppContext, type AppContext } from '../support/app-context';
 import { CookieClient } from '../support/cookie-client';
+import { seedPeople, seedTwoCourses, seedTwoSections } from '../support/seed-people';
 import { drawVariant, type Variant } from '@shared/exercises/variants';
 import type { ExerciseSpecInput } from '@shared/exercises/spec';
 import type { AnswerKeyResponse, ExerciseMutationResponse, ExercisesResponse, PreviewResponse, StaffExercise, StudentExercise } from '@shared/api/exercises';
@@ -98,30 +99,18 @@ beforeAll(async () => {
   k = ctx.db.knex;
   const user = async (login: string | null, name: string, email: string) =>
     (await k('users').insert({ oidc_issuer: login ? ctx.issuer : null, oidc_subject: login, email, display_name: name }))[0] as number;
-  ids.lec1 = await user('lec1', 'Lena Lecturer', 'lec1@test.example');
-  const lec2 = await user('lec2', 'Leo Otherlecturer', 'lec2@test.example');
-  const ta1 = await user('ta1', 'Tariq Assistant', 'ta1@test.example');
-  const stu1 = await user('stu1', 'Stella Student', 'stu1@test.example');
-  const stu2 = await user('stu2', 'Sam Student', 'stu2@test.example');
-  const [term] = await k('terms').insert({ name: 'Test term', starts_on: '2026-09-01', ends_on: '2026-12-20' });
-  [ids.c1] = await k('courses').insert({ term_id: term, code: 'TST 101', title: 'Test course one' });
-  [ids.c2] = await k('courses').insert({ term_id: term, code: 'TST 202', title: 'Test course two' });
-  await k('course_staff').insert([
-    { course_id: ids.c1, user_id: ids.lec1, role: 'lecturer' },
-    { course_id: ids.c1, user_id: ta1, role: 'assistant' },
-    { course_id: ids.c2, user_id: lec2, role: 'lecturer' },
-  ]);
-  [ids.secA] = await k('sections').insert({ course_id: ids.c1, name: 'Section A' });
-  [ids.secB] = await k('sections').insert({ course_id: ids.c1, name: 'Section B' });
-  await k('section_assistants').insert({ section_id: ids.secA, user_id: ta1 });
-  [ids.stu1Enrol] = await k('enrolments').insert({ course_id: ids.c1, user_id: stu1, student_number: c1Numbers[0], section_id: ids.secA });
+  const people = await seedPeople(k, ctx.issuer, ['lec1', 'lec2', 'ta1', 'stu1', 'stu2']);
+  ids.lec1 = people.lec1;
+  ({ c1: ids.c1, c2: ids.c2 } = await seedTwoCourses(k, people));
+  ({ sectionA: ids.secA, sectionB: ids.secB } = await seedTwoSections(k, ids.c1, people.ta1));
+  [ids.stu1Enrol] = await k('enrolments').insert({ course_id: ids.c1, user_id: people.stu1, student_number: c1Numbers[0], section_id: ids.secA });
   for (const [i, number] of c1Numbers.slice(1).entries()) {
     const u = await user(null, `Roster Person ${i}`, `r${number}@test.example`);
     await k('enrolments').insert({ course_id: ids.c1, user_id: u, student_number: number, section_id: i % 2 === 0 ? ids.secA : ids.secB, given_name: 'Roster', family_name: `Person ${i}` });
   }
   const gone = await user(null, 'Withdrawn Person', 'gone@test.example');
   [ids.withdrawn] = await k('enrolments').insert({ course_id: ids.c1, user_id: gone, student_number: '1000099', status: 'withdrawn' });
-  [ids.stu2Enrol] = await k('enrolments').insert({ course_id: ids.c2, user_id: stu2, student_number: '2000001' });
+  [ids.stu2Enrol] = await k('enrolments').insert({ course_id: ids.c2, user_id: people.stu2, student_number: '2000001' });
 });
 
 afterAll(async () => {

@@ -11,6 +11,7 @@ import { exerciseSpecSchema, type ExerciseSpec, type ExerciseSpecInput } from '@
 import { drawVariant, type Variant } from '@shared/exercises/variants';
 import { distanceFromBohr, energyFromHartree, type DistanceUnit, type EnergyUnit } from '@shared/chemistry/units';
 import { defaultCurveScheme } from '@shared/marking/score';
+import { seedPeople, seedTwoCourses, seedTwoSections } from '../support/seed-people';
 
 export function curveSpec(overrides: Partial<ExerciseSpecInput> = {}): ExerciseSpec {
   return exerciseSpecSchema.parse({
@@ -52,26 +53,9 @@ export interface SeededCourse {
  * `nobody` is a student.
  */
 export async function seedCourse(k: Knex, issuer: string): Promise<SeededCourse> {
-  const user = async (login: string, name: string) => (await k('users').insert({ oidc_issuer: issuer, oidc_subject: login, email: `${login}@test.example`, display_name: name }))[0] as number;
-  const users = {
-    lec1: await user('lec1', 'Lena Lecturer'),
-    lec2: await user('lec2', 'Leo Otherlecturer'),
-    ta1: await user('ta1', 'Tariq Assistant'),
-    stu1: await user('stu1', 'Stella Student'),
-    stu2: await user('stu2', 'Sam Student'),
-    nobody: await user('nobody', 'Noor Norole'),
-  };
-  const [term] = await k('terms').insert({ name: 'Test term', starts_on: '2026-09-01', ends_on: '2026-12-20' });
-  const [courseId] = await k('courses').insert({ term_id: term, code: 'TST 101', title: 'Test course one' });
-  const [otherCourseId] = await k('courses').insert({ term_id: term, code: 'TST 202', title: 'Test course two' });
-  await k('course_staff').insert([
-    { course_id: courseId, user_id: users.lec1, role: 'lecturer' },
-    { course_id: courseId, user_id: users.ta1, role: 'assistant' },
-    { course_id: otherCourseId, user_id: users.lec2, role: 'lecturer' },
-  ]);
-  const [sectionA] = await k('sections').insert({ course_id: courseId, name: 'Section A' });
-  const [sectionB] = await k('sections').insert({ course_id: courseId, name: 'Section B' });
-  await k('section_assistants').insert({ section_id: sectionA, user_id: users.ta1 });
+  const users = await seedPeople(k, issuer, ['lec1', 'lec2', 'ta1', 'stu1', 'stu2', 'nobody']);
+  const { c1: courseId, c2: otherCourseId } = await seedTwoCourses(k, users);
+  const { sectionA, sectionB } = await seedTwoSections(k, courseId, users.ta1);
   const studentNumbers = { stu1: '2400101', stu2: '2400102' };
   const [e1] = await k('enrolments').insert({ course_id: courseId, user_id: users.stu1, student_number: studentNumbers.stu1, section_id: sectionA });
   const [e2] = await k('enrolments').insert({ course_id: courseId, user_id: users.stu2, student_number: studentNumbers.stu2, section_id: sectionB });

@@ -11,6 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RosterApplyResult, RosterEntry, RosterImportRecord, RosterMapping, RosterPreview } from '@shared/api/roster';
 import { startAppContext, type AppContext } from '../support/app-context';
 import { CookieClient } from '../support/cookie-client';
+import { seedPeople, seedTwoCourses } from '../support/seed-people';
 
 let ctx: AppContext;
 const ids: Record<string, number> = {};
@@ -50,25 +51,10 @@ const STANDARD: RosterMapping = { studentNumber: 0, familyName: 1, givenName: 2,
 beforeAll(async () => {
   ctx = await startAppContext();
   const k = ctx.db.knex;
-  for (const [login, name] of [
-    ['adm', 'Ada Admin'],
-    ['lec1', 'Lena Lecturer'],
-    ['lec2', 'Leo Otherlecturer'],
-    ['ta1', 'Tariq Assistant'],
-    ['stu1', 'Stella Student'],
-  ]) {
-    [ids[login]] = await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: login, email: `${login}@test.example`, display_name: name });
-  }
-  [ids.term] = await k('terms').insert({ name: 'Test term', starts_on: '2026-09-01', ends_on: '2026-12-20' });
-  [ids.c1] = await k('courses').insert({ term_id: ids.term, code: 'TST 101', title: 'Test course one' });
-  [ids.c2] = await k('courses').insert({ term_id: ids.term, code: 'TST 202', title: 'Test course two' });
+  const people = await seedPeople(k, ctx.issuer, ['adm', 'lec1', 'lec2', 'ta1', 'stu1']);
+  Object.assign(ids, people, await seedTwoCourses(k, people));
   [ids.c3] = await k('courses').insert({ term_id: ids.term, code: 'TST 303', title: 'Sixty students' });
-  await k('course_staff').insert([
-    { course_id: ids.c1, user_id: ids.lec1, role: 'lecturer' },
-    { course_id: ids.c1, user_id: ids.ta1, role: 'assistant' },
-    { course_id: ids.c2, user_id: ids.lec2, role: 'lecturer' },
-    { course_id: ids.c3, user_id: ids.lec1, role: 'lecturer' },
-  ]);
+  await k('course_staff').insert({ course_id: ids.c3, user_id: ids.lec1, role: 'lecturer' });
   [ids.labA] = await k('sections').insert({ course_id: ids.c1, name: 'Lab A', weekday: 2, starts_at: '09:00', ends_at: '12:00', capacity: 3 });
   [ids.labB] = await k('sections').insert({ course_id: ids.c1, name: 'Lab B', weekday: 4, starts_at: '14:00', ends_at: '17:00' });
   await k('section_assistants').insert({ section_id: ids.labA, user_id: ids.ta1 });
