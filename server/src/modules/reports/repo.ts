@@ -4,6 +4,7 @@
  * shapes here: service.ts makes those.
  */
 import type { Knex } from 'knex';
+import type { VariantRow } from '../exercises/repo';
 
 type Db = Knex | Knex.Transaction;
 
@@ -95,14 +96,8 @@ export async function extensionsOfExercise(db: Db, exerciseId: number): Promise<
   return out;
 }
 
-export interface VariantRow {
-  id: number;
-  revision_id: number;
-  enrolment_id: number;
-  variant_key: string;
-  variant_json: unknown;
-  template_token: string;
-}
+/** A variants row, as the exercises module stores it. */
+export type { VariantRow };
 
 export function findVariantById(db: Db, id: number): Promise<VariantRow | undefined> {
   return db('variants').where({ id }).first('id', 'revision_id', 'enrolment_id', 'variant_key', 'variant_json', 'template_token');
