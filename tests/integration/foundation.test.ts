@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startAppContext, type AppContext } from '../support/app-context';
 import { CookieClient } from '../support/cookie-client';
+import { seedPeople, seedTwoCourses } from '../support/seed-people';
 
 let ctx: AppContext;
 
@@ -8,20 +9,9 @@ beforeAll(async () => {
   ctx = await startAppContext();
   // a course with a lecturer, an assistant and an enrolled student; 'lec2' teaches another course
   const k = ctx.db.knex;
-  const user = async (login: string, name: string) => (await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: login, email: `${login}@test.example`, display_name: name }))[0];
-  const lec1 = await user('lec1', 'Lena Lecturer');
-  const lec2 = await user('lec2', 'Leo Otherlecturer');
-  const ta1 = await user('ta1', 'Tariq Assistant');
-  const stu1 = await user('stu1', 'Stella Student');
-  const [term] = await k('terms').insert({ name: 'Test term', starts_on: '2026-09-01', ends_on: '2026-12-20' });
-  const [c1] = await k('courses').insert({ term_id: term, code: 'TST 101', title: 'Test course one' });
-  const [c2] = await k('courses').insert({ term_id: term, code: 'TST 202', title: 'Test course two' });
-  await k('course_staff').insert([
-    { course_id: c1, user_id: lec1, role: 'lecturer' },
-    { course_id: c1, user_id: ta1, role: 'assistant' },
-    { course_id: c2, user_id: lec2, role: 'lecturer' },
-  ]);
-  await k('enrolments').insert({ course_id: c1, user_id: stu1, student_number: '1000001' });
+  const people = await seedPeople(k, ctx.issuer, ['lec1', 'lec2', 'ta1', 'stu1']);
+  const { c1 } = await seedTwoCourses(k, people);
+  await k('enrolments').insert({ course_id: c1, user_id: people.stu1, student_number: '1000001' });
 });
 
 afterAll(async () => {
