@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ExerciseReports, ReadPreview, ReportDetail, UploadResult } from '@shared/api/reports';
 import type { ExerciseMutationResponse } from '@shared/api/exercises';
 import { startAppContext, type AppContext } from '../support/app-context';
-import type { CookieClient } from '../support/cookie-client';
+import { sessionClients } from '../support/session-clients';
 import { createPublishedExercise, curveReferenceOf, curveSpec, fillTemplate, referenceCsv, seedCourse, uploadForm, variantOf, type SeededCourse } from './reports-fixtures';
 
 let ctx: AppContext;
@@ -40,20 +40,7 @@ afterAll(async () => {
   await ctx?.close();
 });
 
-const clients = new Map<string, CookieClient>();
-async function as(login: string) {
-  if (!clients.has(login)) clients.set(login, await ctx.signIn(login));
-  const client = clients.get(login)!;
-  return { client, token: await ctx.csrf(client) };
-}
-async function post<T>(login: string, path: string, form: FormData) {
-  const { client, token } = await as(login);
-  return client.json<T>(`${ctx.baseUrl}/api/v1${path}`, { method: 'POST', body: form, headers: { 'x-csrf-token': token } });
-}
-async function get<T>(login: string, path: string) {
-  const { client } = await as(login);
-  return client.json<T>(`${ctx.baseUrl}/api/v1${path}`);
-}
+const { as, post, get } = sessionClients(() => ctx);
 
 const stu1Reference = (spec = atOnceSpec) => curveReferenceOf(spec, variantOf(spec, seed.studentNumbers.stu1));
 const bohrHartree = { distanceColumn: 'A', energyColumns: ['B', 'C'], distanceUnit: 'bohr', energyUnit: 'hartree' };

@@ -11,6 +11,7 @@ import { ENGINE_VERSION } from '@shared/exercises/reference';
 import type { ExerciseReports, ReadPreview, ReportDetail, UploadResult } from '@shared/api/reports';
 import { startAppContext, type AppContext } from '../support/app-context';
 import { CookieClient } from '../support/cookie-client';
+import { sessionClients } from '../support/session-clients';
 import {
   createPublishedExercise,
   curveReferenceOf,
@@ -50,22 +51,7 @@ afterAll(async () => {
   await ctx?.close();
 });
 
-const clients = new Map<string, CookieClient>();
-async function as(login: string) {
-  if (!clients.has(login)) clients.set(login, await ctx.signIn(login));
-  const client = clients.get(login)!;
-  return { client, token: await ctx.csrf(client) };
-}
-
-async function post<T>(login: string, path: string, form: FormData) {
-  const { client, token } = await as(login);
-  return client.json<T>(`${ctx.baseUrl}/api/v1${path}`, { method: 'POST', body: form, headers: { 'x-csrf-token': token } });
-}
-
-async function get<T>(login: string, path: string) {
-  const { client } = await as(login);
-  return client.json<T>(`${ctx.baseUrl}/api/v1${path}`);
-}
+const { as, post, get } = sessionClients(() => ctx);
 
 function stu1Csv(options: Parameters<typeof referenceCsv>[1] = {}) {
   return referenceCsv(curveReferenceOf(spec, variantOf(spec, seed.studentNumbers.stu1)), options);
