@@ -53,7 +53,6 @@ export function MyExercisesTable({ exercises, loading, nowMs }: { exercises: MyE
           <Th>Exercise</Th>
           <Th>Your variant</Th>
           <Th>Due</Th>
-          <Th>Late uploads</Th>
           <Th>State</Th>
           <Th>Template</Th>
           <Th>Report</Th>
@@ -61,7 +60,7 @@ export function MyExercisesTable({ exercises, loading, nowMs }: { exercises: MyE
       </thead>
       <tbody>
         {loading || !exercises ? (
-          <SkeletonRows columns={7} rows={4} label="Loading your exercises" />
+          <SkeletonRows columns={6} rows={4} label="Loading your exercises" />
         ) : (
           exercises.map((exercise) => (
             <tr key={exercise.exerciseId} data-testid="my-exercise-row" data-exercise-id={exercise.exerciseId} className="hover:bg-paper">
@@ -96,8 +95,8 @@ export function MyExercisesTable({ exercises, loading, nowMs }: { exercises: MyE
                     </>
                   ) : null}
                 </div>
+                <div className="mt-1 max-w-[26ch] whitespace-normal text-[0.8rem] text-graphite">Late: {exercise.late.summary}</div>
               </Td>
-              <Td className="max-w-[22rem] text-[0.85rem]">{exercise.late.summary}</Td>
               <Td>
                 <WindowStatus exercise={exercise} />
               </Td>
@@ -106,7 +105,9 @@ export function MyExercisesTable({ exercises, loading, nowMs }: { exercises: MyE
               </Td>
               <Td>
                 {exercise.window === 'closed' ? (
-                  <span className="text-graphite">No more uploads</span>
+                  <Link to={`/my/exercises/${exercise.exerciseId}/upload`} className="text-reference underline" aria-label={`Your reports: ${exercise.title}`}>
+                    Your reports
+                  </Link>
                 ) : (
                   <Link
                     to={`/my/exercises/${exercise.exerciseId}/upload`}
