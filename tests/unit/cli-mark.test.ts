@@ -3,7 +3,6 @@
  * without the antibonding curve), a scheme file, --units, and status 2 with one stderr line for an
  * unreadable report (the reader's own message) and for bad flags.
  */
-import { execFile } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -11,24 +10,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { distanceFromBohr, energyFromHartree } from '@shared/chemistry/units';
 import { readReport } from '@shared/marking/read';
 import { FIXTURE_DIR, fixtureReference } from '../fixtures/marking/make-fixtures';
+import { runCases, type Run } from '../support/cli';
 
-const ROOT = join(import.meta.dirname, '..', '..');
-const TSX = join(ROOT, 'node_modules', '.bin', 'tsx');
-
-interface Run {
-  code: number;
-  stdout: string;
-  stderr: string;
-}
-
-function cli(args: string[]): Promise<Run> {
-  return new Promise((resolve) => {
-    execFile(TSX, ['scripts/cli.ts', ...args], { cwd: ROOT, timeout: 60_000 }, (error, stdout, stderr) => {
-      const code = error ? (typeof error.code === 'number' ? error.code : -1) : 0;
-      resolve({ code, stdout, stderr });
-    });
-  });
-}
 
 const fixture = (name: string) => join(FIXTURE_DIR, name);
 const dir = mkdtempSync(join(tmpdir(), 'bondmark-mark-'));
@@ -68,14 +51,10 @@ const cases = {
   badUnits: ['mark', '--model', 'lcao', '--report', noUnits, '--units', 'furlong,ev'],
 } satisfies Record<string, string[]>;
 
-const results = {} as Record<keyof typeof cases, Run>;
+let results = {} as Record<keyof typeof cases, Run>;
 
 beforeAll(async () => {
-  const queue = Object.entries(cases) as Array<[keyof typeof cases, string[]]>;
-  const worker = async () => {
-    for (let next = queue.shift(); next; next = queue.shift()) results[next[0]] = await cli(next[1]);
-  };
-  await Promise.all([worker(), worker(), worker(), worker()]);
+  results = await runCases(cases);
 }, 300_000);
 
 const json = (run: Run) => JSON.parse(run.stdout) as Record<string, any>;

@@ -3,30 +3,13 @@
  * output shape of each command and the bad-input errors (status 2, one line on stderr).
  * All processes start together in beforeAll (four at a time) to keep the file quick.
  */
-import { execFile } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { curvePoint } from '@shared/chemistry/curves';
+import { runCases, type Run } from '../support/cli';
 
-const ROOT = join(import.meta.dirname, '..', '..');
-const TSX = join(ROOT, 'node_modules', '.bin', 'tsx');
-
-interface Run {
-  code: number;
-  stdout: string;
-  stderr: string;
-}
-
-function cli(args: string[]): Promise<Run> {
-  return new Promise((resolve) => {
-    execFile(TSX, ['scripts/cli.ts', ...args], { cwd: ROOT, timeout: 60_000 }, (error, stdout, stderr) => {
-      const code = error ? (typeof error.code === 'number' ? error.code : -1) : 0;
-      resolve({ code, stdout, stderr });
-    });
-  });
-}
 
 const dir = mkdtempSync(join(tmpdir(), 'bondmark-cli-'));
 const allylCation = join(dir, 'allyl-cation.json');
@@ -52,14 +35,10 @@ const cases = {
   badGraph: ['huckel', '--graph', brokenGraph],
 } satisfies Record<string, string[]>;
 
-const results = {} as Record<keyof typeof cases, Run>;
+let results = {} as Record<keyof typeof cases, Run>;
 
 beforeAll(async () => {
-  const queue = Object.entries(cases) as Array<[keyof typeof cases, string[]]>;
-  const worker = async () => {
-    for (let next = queue.shift(); next; next = queue.shift()) results[next[0]] = await cli(next[1]);
-  };
-  await Promise.all([worker(), worker(), worker(), worker()]);
+  results = await runCases(cases);
 }, 300_000);
 
 const json = (run: Run) => JSON.parse(run.stdout) as Record<string, unknown>;

@@ -1,24 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { fitMorse, morseEnergy, type MorseParameters } from '@shared/chemistry/analysis';
+import { gaussian, mulberry32 } from '../../support/random';
 
 // H2-like Morse parameters (from memory; only used to build synthetic curves)
 const H2_LIKE: MorseParameters = { deHartree: 0.1745, aPerBohr: 1.0277, reBohr: 1.4011, asymptoteHartree: -1 };
 
-/** mulberry32 seeded PRNG, uniform on [0, 1) */
-function mulberry32(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-/** Box–Muller standard normal deviate */
-function gaussian(random: () => number): number {
-  return Math.sqrt(-2 * Math.log(1 - random())) * Math.cos(2 * Math.PI * random());
-}
 
 function unevenMorse(seed: number, sigma: number, p: MorseParameters) {
   const random = mulberry32(seed);

@@ -1,29 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { analyseCurve, classifyCurve, findMinimum, morseEnergy, type MorseParameters } from '@shared/chemistry/analysis';
 import { curve } from '@shared/chemistry/curves';
+import { gaussian, mulberry32 } from '../../support/random';
 
 // Regression tests for a false well in the flat, noisy tail of a repulsive curve. The lowest (noise) point
 // lay a few points before the end of the data; the first fit window had to rise above it at its end point,
 // which at the end of the data can no longer move, so the window grew over the whole curve and the quartic
 // through the wall and the tail had a spurious minimum 0.04 Eh below the data ("bound").
 
-/** mulberry32: small seeded PRNG (public-domain construction by T. Ettinger), uniform on [0, 1) */
-function mulberry32(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-/** standard normal deviate by the Box–Muller transform */
-function gaussian(random: () => number): number {
-  const u = 1 - random();
-  const v = random();
-  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * v);
-}
 
 function grid(from: number, to: number, step: number, offset = 0): number[] {
   const out: number[] = [];

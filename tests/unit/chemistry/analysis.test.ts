@@ -16,27 +16,11 @@ import {
   type MorseParameters,
 } from '@shared/chemistry/analysis';
 import { BOHR_ANGSTROM, HARTREE_EV, SPEED_OF_LIGHT_AU } from '@shared/chemistry/units';
+import { gaussian, mulberry32 } from '../../support/random';
 
 // H2-like Morse parameters (from memory; used only to build synthetic curves, never as outside check values)
 const H2_LIKE: MorseParameters = { deHartree: 0.1745, aPerBohr: 1.0277, reBohr: 1.4011, asymptoteHartree: -1 };
 
-/** mulberry32: small seeded PRNG (public-domain construction by T. Ettinger), uniform on [0, 1) */
-function mulberry32(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-/** standard normal deviate by the Box–Muller transform */
-function gaussian(random: () => number): number {
-  const u = 1 - random();
-  const v = random();
-  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * v);
-}
 
 function grid(from: number, to: number, step: number, offset = 0): number[] {
   const out: number[] = [];

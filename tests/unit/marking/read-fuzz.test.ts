@@ -6,21 +6,11 @@ import { readFileSync } from 'node:fs';
 import JSZip from 'jszip';
 import { describe, expect, it } from 'vitest';
 import { READ_ERROR_CODE_LIST, detectFileType, readReport, type ReadResult } from '@shared/marking/read';
+import { mulberry32 } from '../../support/random';
 
 const fixtureDir = new URL('../../fixtures/reports/', import.meta.url);
 const fixture = (name: string) => new Uint8Array(readFileSync(new URL(name, fixtureDir)));
 
-/** mulberry32 (T. Ettinger, public domain): a small seeded PRNG so failures can be replayed */
-function mulberry32(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const HANG_GUARD_MS = 10_000; // per call; a guard against hangs, not a benchmark
 
