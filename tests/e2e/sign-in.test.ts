@@ -3,6 +3,7 @@ import type { Browser, Page } from 'playwright-core';
 import { startAppContext, type AppContext } from '../support/app-context';
 import { launchBrowser, signInWithBrowser } from '../support/browser';
 import { ensureClientBuilt } from '../../scripts/lib/client-build';
+import { seedLecturerAndStudentCourse } from '../support/seed-people';
 
 let ctx: AppContext;
 let browser: Browser;
@@ -10,13 +11,7 @@ let browser: Browser;
 beforeAll(async () => {
   await ensureClientBuilt(() => {});
   ctx = await startAppContext({ client: 'static' });
-  const k = ctx.db.knex;
-  const [lec] = await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: 'lec1', email: 'lec1@test.example', display_name: 'Lena Lecturer' });
-  const [stu] = await k('users').insert({ oidc_issuer: ctx.issuer, oidc_subject: 'stu1', email: 'stu1@test.example', display_name: 'Stella Student' });
-  const [term] = await k('terms').insert({ name: 'Spring 2027', starts_on: '2027-01-11', ends_on: '2027-05-07' });
-  const [course] = await k('courses').insert({ term_id: term, code: 'TST 410', title: 'Bonding in practice' });
-  await k('course_staff').insert({ course_id: course, user_id: lec, role: 'lecturer' });
-  await k('enrolments').insert({ course_id: course, user_id: stu, student_number: '1000001' });
+  await seedLecturerAndStudentCourse(ctx.db.knex, ctx.issuer);
   browser = await launchBrowser();
 });
 

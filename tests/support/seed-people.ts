@@ -51,3 +51,16 @@ export async function seedTwoSections(k: Knex, courseId: number, assistant: numb
   await k('section_assistants').insert({ section_id: sectionA, user_id: assistant });
   return { sectionA, sectionB };
 }
+
+/**
+ * The small course browser journeys start from: lec1 lectures TST 410 "Bonding in practice"
+ * (term Spring 2027) and stu1 is enrolled with student number 1000001.
+ */
+export async function seedLecturerAndStudentCourse(k: Knex, issuer: string): Promise<{ lec1: number; stu1: number; term: number; course: number }> {
+  const { lec1, stu1 } = await seedPeople(k, issuer, ['lec1', 'stu1']);
+  const [term] = await k('terms').insert({ name: 'Spring 2027', starts_on: '2027-01-11', ends_on: '2027-05-07' });
+  const [course] = await k('courses').insert({ term_id: term, code: 'TST 410', title: 'Bonding in practice' });
+  await k('course_staff').insert({ course_id: course, user_id: lec1, role: 'lecturer' });
+  await k('enrolments').insert({ course_id: course, user_id: stu1, student_number: '1000001' });
+  return { lec1, stu1, term, course };
+}
